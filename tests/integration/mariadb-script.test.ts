@@ -7,7 +7,9 @@ import { afterAll, describe, expect, it } from "vitest";
 
 const root = join(__dirname, "..", "..");
 const dataDir = join(root, ".data", "test-mariadb-script");
-const env: NodeJS.ProcessEnv = { ...process.env, DATA_DIR: dataDir, DB_PORT: "3499" };
+// A port of its own, derived from DB_PORT so parallel checkouts with other ports never collide.
+const port = String(Number(process.env.DB_PORT ?? 3407) + 50);
+const env: NodeJS.ProcessEnv = { ...process.env, DATA_DIR: dataDir, DB_PORT: port };
 const pidFile = join(dataDir, "mariadb", "mariadb.pid");
 
 function script(cmd: string): { status: number | null; out: string } {
@@ -18,7 +20,7 @@ function script(cmd: string): { status: number | null; out: string } {
 function query(sql: string): string {
   return execFileSync(
     "mariadb",
-    ["--no-defaults", "-h127.0.0.1", "-P3499", `-u${env.DB_USER}`, `-p${env.DB_PASSWORD}`, "-N", "-e", sql],
+    ["--no-defaults", "-h127.0.0.1", `-P${port}`, `-u${env.DB_USER}`, `-p${env.DB_PASSWORD}`, "-N", "-e", sql],
     { encoding: "utf8" },
   ).trim();
 }
