@@ -1,0 +1,62 @@
+import { z } from "zod";
+
+// The final setup sheet of a commission, as stored: every length in millimetres (forms convert
+// from the workshop's unit before sending), forces in newtons, intonation in cents.
+
+const mm = (what: string) => z.number({ error: `Enter ${what} as a number.` }).finite();
+
+/** Our own electronics checklist, in the order a builder works through it. */
+export const ELECTRONICS_CHECKS = [
+  { key: "jack_output", label: "Output jack tight; signal on every pickup" },
+  { key: "selector_positions", label: "Every selector position gives the expected pickup(s)" },
+  { key: "pots_sweep", label: "Volume and tone controls sweep smoothly, no crackle" },
+  { key: "string_ground", label: "Bridge and strings bonded to signal ground (continuity measured)" },
+  { key: "shielding", label: "Cavity shielding continuous to ground" },
+  { key: "hum_touch", label: "Hum drops when the strings are touched" },
+  { key: "balance", label: "Output levels balanced between pickups" },
+  { key: "active_current", label: "Active electronics: battery current draw checked (skip if passive)" },
+] as const;
+
+export type ElectronicsCheckKey = (typeof ELECTRONICS_CHECKS)[number]["key"];
+
+export const pullTestSchema = z.object({
+  forceN: mm("the force").positive("The force must be above zero."),
+  deflectionMm: mm("the deflection").positive("The deflection must be above zero."),
+  /** Span between the two support points (usually nut to saddle); the scale length when left out. */
+  spanMm: mm("the span").positive().optional(),
+});
+
+export const setupStringSchema = z.object({
+  /** 1 = highest-pitched string, as in the spec. */
+  string: z.int().min(1).max(12),
+  actionAt12Mm: mm("the action"),
+  nutSlotAt1Mm: mm("the nut slot height"),
+  intonationCents: z.number({ error: "Enter the error in cents." }).finite(),
+  pullTest: pullTestSchema.nullish(),
+});
+
+export const setupSheetSchema = z.object({
+  strings: z.array(setupStringSchema).min(1, "Record at least one string.").max(12),
+  neck: z.object({
+    reliefMm: mm("the relief"),
+    reliefAtFret: z.union([z.literal(7), z.literal(8), z.literal(9)]),
+    trussRodNotes: z.string().max(2000).default(""),
+  }),
+  pickups: z
+    .array(
+      z.object({
+        label: z.string().trim().min(1).max(40),
+        bassSideMm: mm("the bass-side height"),
+        trebleSideMm: mm("the treble-side height"),
+      }),
+    )
+    .max(6),
+  electronics: z.object({
+    checks: z.partialRecord(z.enum(ELECTRONICS_CHECKS.map((c) => c.key) as [ElectronicsCheckKey, ...ElectronicsCheckKey[]]), z.boolean()),
+    notes: z.string().max(2000).default(""),
+  }),
+  notes: z.string().max(4000).default(""),
+});
+
+export type SetupSheet = z.infer<typeof setupSheetSchema>;
+export type SetupString = z.infer<typeof setupStringSchema>;
