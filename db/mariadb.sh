@@ -109,6 +109,8 @@ ALTER USER '$DB_USER'@'localhost' IDENTIFIED BY '$pw';
 GRANT ALL PRIVILEGES ON \`$DB_NAME\`.* TO '$DB_USER'@'127.0.0.1', '$DB_USER'@'localhost';
 GRANT ALL PRIVILEGES ON \`$DB_TEST_NAME\`.* TO '$DB_USER'@'127.0.0.1', '$DB_USER'@'localhost';
 GRANT ALL PRIVILEGES ON \`${DB_TEST_NAME}\_%\`.* TO '$DB_USER'@'127.0.0.1', '$DB_USER'@'localhost';
+-- Restores of backups go to databases named <DB_NAME>_<something>.
+GRANT ALL PRIVILEGES ON \`${DB_NAME}\_%\`.* TO '$DB_USER'@'127.0.0.1', '$DB_USER'@'localhost';
 FLUSH PRIVILEGES;
 SQL
 }
