@@ -4,14 +4,14 @@ import type { IncomingMessage, ServerResponse } from "node:http";
 import { readJsonBody, type Router, sendJson } from "../kit/http";
 import type { Outage, OutageMode } from "../kit/serve";
 import type { StripeContext } from "./context";
-import { invalid, noSuch, StripeFakeError } from "./errors";
+import { found, invalid, StripeFakeError } from "./errors";
 import { jsonParams, optInt, optString, type Params } from "./params";
 import { addBalanceTransaction, addCharge, attemptPayment } from "./payments";
 import { runPayouts } from "./payout-run";
 import { createRefund, failRefund } from "./refunding";
 import { refundRequest } from "./resources/payments-read";
 import { checkCard, parseExpiry } from "./test-cards";
-import { fixedFee, FEE_PERCENT, processingFee } from "./fees";
+import { feeDetails, fixedFee, FEE_PERCENT, processingFee } from "./fees";
 import { parseRule } from "./webhooks/rules";
 import type { WebhookDispatcher } from "./webhooks/dispatcher";
 
@@ -160,8 +160,7 @@ export function registerAdmin(router: Router, ctx: StripeContext, outage: Outage
     "POST",
     "/admin/checkout/sessions/:id/pay",
     json((p, { id }) => {
-      const session = s().checkout_sessions[id!];
-      if (!session) throw noSuch("checkout.session", id!);
+      const session = found(s().checkout_sessions[id!], "checkout.session", id!);
       if (session.status !== "open") throw invalid(`Checkout Session is ${session.status}.`);
       const card = checkCard({ number: optString(p, "card_number") ?? "4242424242424242", exp: optString(p, "card_exp") ?? "12/34", cvc: "123" });
       if (!card.valid) throw invalid(card.message, card.field);
@@ -206,14 +205,13 @@ export function registerAdmin(router: Router, ctx: StripeContext, outage: Outage
     "POST",
     "/admin/balance-transactions/:id",
     json((p, { id }) => {
-      const t = s().balance_transactions[id!];
-      if (!t) throw noSuch("balance transaction", id!);
+      const t = found(s().balance_transactions[id!], "balance transaction", id!);
       const amount = optInt(p, "amount", "amount", -1e12);
       const fee = optInt(p, "fee", "fee", 0);
       if (amount !== null) t.amount = amount;
       if (fee !== null) {
         t.fee = fee;
-        t.fee_details = fee ? [{ amount: fee, application: null, currency: t.currency, description: "Processing fee (local fake)", type: "stripe_fee" }] : [];
+        t.fee_details = feeDetails(fee, t.currency);
       }
       t.net = t.amount - t.fee;
       return t;

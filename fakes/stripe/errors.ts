@@ -30,5 +30,11 @@ export const invalid = (message: string, param?: string, code = "parameter_inval
 export const missingParam = (param: string) =>
   new StripeFakeError(400, "invalid_request_error", `Missing required param: ${param}.`, "parameter_missing", param);
 
+/** The object, or the API's 404 for it. */
+export function found<T>(obj: T | undefined, what: string, id: string, param = "id"): T {
+  if (obj === undefined) throw noSuch(what, id, param);
+  return obj;
+}
+
 export const noSuch = (what: string, id: string, param = "id") =>
   new StripeFakeError(404, "invalid_request_error", `No such ${what}: '${id}'`, "resource_missing", param);

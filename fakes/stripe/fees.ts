@@ -10,6 +10,11 @@ export function fixedFee(currency: string): number {
   return FIXED_MINOR[currency.toLowerCase()] ?? DEFAULT_FIXED_MINOR;
 }
 
+/** The `fee_details` list of a balance transaction carrying `fee`. */
+export function feeDetails(fee: number, currency: string) {
+  return fee ? [{ amount: fee, application: null, currency, description: "Processing fee (local fake)", type: "stripe_fee" as const }] : [];
+}
+
 /** The fee on a successful charge of `amount` minor units; never more than the amount. */
 export function processingFee(amount: number, currency: string): number {
   const fee = Math.round((amount * FEE_PERCENT) / 100) + fixedFee(currency);

@@ -2,7 +2,7 @@
 // first attempt, each attempt makes a charge, and a successful one a balance transaction with the
 // fee. Events go out in the order the hosted service sends them.
 import type { StripeContext } from "./context";
-import { processingFee } from "./fees";
+import { feeDetails, processingFee } from "./fees";
 import { newId, nowSeconds } from "./ids";
 import type { CardOutcome } from "./test-cards";
 import type { BalanceTransaction, Charge, CheckoutSession, PaymentIntent } from "./types";
@@ -67,7 +67,7 @@ export function addBalanceTransaction(
     description: fields.description,
     exchange_rate: null,
     fee,
-    fee_details: fee ? [{ amount: fee, application: null, currency: fields.currency, description: "Processing fee (local fake)", type: "stripe_fee" }] : [],
+    fee_details: feeDetails(fee, fields.currency),
     net: fields.amount - fee,
     reporting_category: fields.type === "refund_failure" ? "refund_failure" : fields.type,
     source: fields.source,

@@ -1,7 +1,7 @@
 // Refunds of a succeeded charge, full or partial: a negative balance transaction, the charge's
 // amount_refunded, and the events (unless the caller wants the app kept in the dark).
 import type { StripeContext } from "./context";
-import { invalid, noSuch } from "./errors";
+import { found, invalid } from "./errors";
 import { newId, nowSeconds } from "./ids";
 import { addBalanceTransaction } from "./payments";
 import type { Charge, Metadata, Refund } from "./types";
@@ -16,13 +16,10 @@ export interface RefundRequest {
 
 function chargeToRefund(ctx: StripeContext, r: RefundRequest): Charge {
   if (r.charge) {
-    const ch = ctx.state.charges[r.charge];
-    if (!ch) throw noSuch("charge", r.charge, "charge");
-    return ch;
+    return found(ctx.state.charges[r.charge], "charge", r.charge, "charge");
   }
   if (!r.payment_intent) throw invalid("One of the following params should be provided for this request: payment_intent or charge.", undefined, "parameter_missing");
-  const pi = ctx.state.payment_intents[r.payment_intent];
-  if (!pi) throw noSuch("payment_intent", r.payment_intent, "payment_intent");
+  const pi = found(ctx.state.payment_intents[r.payment_intent], "payment_intent", r.payment_intent, "payment_intent");
   const ch = pi.latest_charge ? ctx.state.charges[pi.latest_charge] : undefined;
   if (pi.status !== "succeeded" || !ch) {
     throw invalid(`This PaymentIntent (${pi.id}) does not have a successful charge to refund.`, "payment_intent", "charge_not_refundable");
@@ -72,8 +69,7 @@ export function createRefund(ctx: StripeContext, r: RefundRequest, notify = true
 
 /** Admin: the bank returned a refund. A reversing balance transaction puts the money back. */
 export function failRefund(ctx: StripeContext, id: string, reason = "lost_or_stolen_card"): Refund {
-  const refund = ctx.state.refunds[id];
-  if (!refund) throw noSuch("refund", id);
+  const refund = found(ctx.state.refunds[id], "refund", id);
   if (refund.status !== "succeeded" && refund.status !== "pending") throw invalid(`Refund ${id} is ${refund.status}.`);
   const previous = { status: refund.status };
   refund.status = "failed";

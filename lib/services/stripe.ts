@@ -17,7 +17,7 @@ const StripeEnv = z.object({
 export type StripeSettings = z.infer<typeof StripeEnv>;
 
 /** Reads and checks the Stripe variables; a missing or malformed one names itself in the error. */
-export function stripeSettings(env: NodeJS.ProcessEnv = process.env): StripeSettings {
+export function stripeSettings(env: Record<string, string | undefined> = process.env): StripeSettings {
   const parsed = StripeEnv.safeParse(env);
   if (!parsed.success) {
     const what = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");

@@ -36,7 +36,7 @@ export function uploadthingToken(apiKey: string, appId: string): string {
   return Buffer.from(JSON.stringify({ apiKey, appId, regions: ["local"] })).toString("base64");
 }
 
-export function uploadthingSettings(env: NodeJS.ProcessEnv = process.env): UploadthingSettings {
+export function uploadthingSettings(env: Record<string, string | undefined> = process.env): UploadthingSettings {
   const parsed = UploadthingEnv.safeParse(env);
   if (!parsed.success) {
     const what = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");

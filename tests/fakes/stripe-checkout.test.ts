@@ -1,19 +1,15 @@
 // The Stripe fake with the real SDK: checkout sessions created by the app's client, paid or
 // declined on the hosted page as a browser posts it, webhooks verified by stripe.webhooks.constructEvent.
 import Stripe from "stripe";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { processingFee } from "@/fakes/stripe/fees";
 import { pause } from "./helpers/webhook-listener";
-import { CARD_DECLINED, CARD_NO_FUNDS, CARD_OK, depositSession, payOnHostedPage, startStripeRig, type StripeRig } from "./helpers/stripe-setup";
+import { CARD_DECLINED, CARD_NO_FUNDS, CARD_OK, depositSession, payOnHostedPage, useStripeRig, type StripeRig } from "./helpers/stripe-setup";
 
+const rigs = useStripeRig();
 let rig: StripeRig;
-beforeAll(async () => {
-  rig = await startStripeRig();
-});
-afterAll(() => rig.close());
-beforeEach(async () => {
-  await rig.admin("/admin/reset", {});
-  rig.hooks.received.length = 0;
+beforeEach(() => {
+  rig = rigs.get();
 });
 
 const types = (events: Stripe.Event[]) => events.map((e) => e.type);

@@ -2,18 +2,14 @@
 // transactions, payouts that group them, paginated lists, and the admin seeds for each
 // reconciliation exception (unmatched money, altered amounts, a refund the app was not told about).
 import Stripe from "stripe";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import { pause } from "./helpers/webhook-listener";
-import { CARD_OK, depositSession, payOnHostedPage, startStripeRig, type StripeRig } from "./helpers/stripe-setup";
+import { CARD_OK, depositSession, payOnHostedPage, useStripeRig, type StripeRig } from "./helpers/stripe-setup";
 
+const rigs = useStripeRig();
 let rig: StripeRig;
-beforeAll(async () => {
-  rig = await startStripeRig();
-});
-afterAll(() => rig.close());
-beforeEach(async () => {
-  await rig.admin("/admin/reset", {});
-  rig.hooks.received.length = 0;
+beforeEach(() => {
+  rig = rigs.get();
 });
 
 /** Pays a session and returns its succeeded payment intent id. */

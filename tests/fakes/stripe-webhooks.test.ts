@@ -1,20 +1,15 @@
 // The Stripe fake's webhook delivery and its test controls: duplicate, delay, hold and release in
 // another order, drop, retries with backoff while the app is down, redelivery.
 import type Stripe from "stripe";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { beforeEach, describe, expect, it } from "vitest";
 import type { Delivery } from "@/fakes/stripe/types";
 import { pause } from "./helpers/webhook-listener";
-import { CARD_OK, depositSession, payOnHostedPage, startStripeRig, type StripeRig } from "./helpers/stripe-setup";
+import { CARD_OK, depositSession, payOnHostedPage, startStripeRig, useStripeRig, type StripeRig } from "./helpers/stripe-setup";
 
+const rigs = useStripeRig({ retryBaseMs: 50, retryMaxMs: 200, maxAttempts: 20 });
 let rig: StripeRig;
-beforeAll(async () => {
-  rig = await startStripeRig({ retryBaseMs: 50, retryMaxMs: 200, maxAttempts: 20 });
-});
-afterAll(() => rig.close());
-beforeEach(async () => {
-  await rig.admin("/admin/reset", {});
-  rig.hooks.received.length = 0;
-  rig.hooks.failing = false;
+beforeEach(() => {
+  rig = rigs.get();
 });
 
 const types = (events: Stripe.Event[]) => events.map((e) => e.type);

@@ -2,7 +2,7 @@
 // line_items and expire.
 import type { ApiRoutes } from "../api";
 import { expand, type StripeContext } from "../context";
-import { invalid, missingParam, noSuch } from "../errors";
+import { found, invalid, missingParam, noSuch } from "../errors";
 import { newId, nowSeconds } from "../ids";
 import { newestFirst, paginate } from "../lists";
 import { expandList, metadata, optArray, optInt, optObject, optString, reqString, type Params } from "../params";
@@ -106,9 +106,7 @@ export function createCheckoutSession(ctx: StripeContext, p: Params): CheckoutSe
 }
 
 export function getSession(ctx: StripeContext, id: string): CheckoutSession {
-  const s = ctx.state.checkout_sessions[id];
-  if (!s) throw noSuch("checkout.session", id);
-  return s;
+  return found(ctx.state.checkout_sessions[id], "checkout.session", id);
 }
 
 /** Ends an open session (API expire, or its expires_at passed); sends checkout.session.expired. */

@@ -2,7 +2,7 @@
 // balance transactions, payouts, events and the balance.
 import type { ApiRoutes } from "../api";
 import { expand, type StripeContext } from "../context";
-import { invalid, noSuch } from "../errors";
+import { found, invalid, noSuch } from "../errors";
 import { newestFirst, paginate } from "../lists";
 import { expandList, metadata, optInt, optString, rangeFilter, type Params } from "../params";
 import { createRefund } from "../refunding";
@@ -25,9 +25,7 @@ export function refundRequest(p: Params) {
 
 function retrieve<T>(ctx: StripeContext, table: Record<string, T>, what: string) {
   return (p: Params, path: Record<string, string>) => {
-    const obj = table[path.id!];
-    if (!obj) throw noSuch(what, path.id!);
-    return expand(ctx.state, obj, expandList(p));
+    return expand(ctx.state, found(table[path.id!], what, path.id!), expandList(p));
   };
 }
 

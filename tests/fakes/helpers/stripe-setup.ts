@@ -1,5 +1,6 @@
 // An in-process Stripe fake with a webhook listener, and the app's own client pointed at it.
 import type Stripe from "stripe";
+import { afterAll, beforeAll, beforeEach } from "vitest";
 import { startStripeFake, type StripeFake } from "@/fakes/stripe/app";
 import { testOptions, type StripeFakeOptions } from "@/fakes/stripe/options";
 import { createStripeClient, stripeSettings } from "@/lib/services/stripe";
@@ -48,6 +49,24 @@ export async function startStripeRig(overrides: Partial<StripeFakeOptions> = {})
       await hooks.close();
     },
   };
+}
+
+/**
+ * One rig for a test file: started before all tests, reset (state, received deliveries, listener
+ * healthy) before each, closed after all. Read it through `get()` inside the tests.
+ */
+export function useStripeRig(overrides: Partial<StripeFakeOptions> = {}): { get(): StripeRig } {
+  let rig: StripeRig | null = null;
+  beforeAll(async () => {
+    rig = await startStripeRig(overrides);
+  });
+  afterAll(() => rig?.close());
+  beforeEach(async () => {
+    await rig!.admin("/admin/reset", {});
+    rig!.hooks.received.length = 0;
+    rig!.hooks.failing = false;
+  });
+  return { get: () => rig! };
 }
 
 export const CARD_OK = "4242 4242 4242 4242";
