@@ -10,7 +10,9 @@
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-DATA_ROOT="${DATA_DIR:-$ROOT/.data}"
+DATA_ROOT="${DATA_DIR:-.data}"
+# A relative DATA_DIR (as in .env.example) is relative to the project, not to mariadbd's cwd.
+case "$DATA_ROOT" in /*) ;; *) DATA_ROOT="$ROOT/$DATA_ROOT" ;; esac
 DIR="$DATA_ROOT/mariadb"
 DATADIR="$DIR/data"
 SOCK="$DIR/mariadb.sock"
