@@ -61,11 +61,12 @@ describe("Stripe fake outages and restarts", () => {
 
   it("refusing connections: the SDK (with the app's one retry) raises StripeConnectionError; afterwards it works", async () => {
     const appLike = createStripeClient(stripeSettings({ ...process.env, STRIPE_SECRET_KEY: rig.fake.ctx.opts.secretKey, STRIPE_API_PORT: String(rig.fake.port), STRIPE_MAX_NETWORK_RETRIES: "1" }));
-    expect((await rig.admin("/admin/outage", { mode: "refuse", seconds: 1.5 })).json.mode).toBe("refuse");
+    // Long enough for the SDK's retry (0.5–1 s later) to be refused too.
+    expect((await rig.admin("/admin/outage", { mode: "refuse", seconds: 3 })).json.mode).toBe("refuse");
     await pause(50);
     const err = await depositSession(appLike).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(Stripe.errors.StripeConnectionError);
-    await pause(1600);
+    for (let i = 0; i < 100 && !(await fetch(`${rig.fake.url}/health`).then((r) => r.ok, () => false)); i++) await pause(100);
     expect((await depositSession(appLike)).status).toBe("open");
   });
 

@@ -3,7 +3,7 @@ import type Stripe from "stripe";
 import { afterAll, beforeAll, beforeEach } from "vitest";
 import { startStripeFake, type StripeFake } from "@/fakes/stripe/app";
 import { testOptions, type StripeFakeOptions } from "@/fakes/stripe/options";
-import { createStripeClient, stripeSettings } from "@/lib/services/stripe";
+import { createStripeClient, stripeSettings, verifyStripeWebhook } from "@/lib/services/stripe";
 import { startWebhookListener, type Received, type WebhookListener } from "./webhook-listener";
 
 export interface StripeRig {
@@ -11,7 +11,7 @@ export interface StripeRig {
   hooks: WebhookListener;
   stripe: Stripe;
   secret: string;
-  /** Verifies deliveries with the SDK's constructEvent, as the app's route will. */
+  /** Verifies deliveries with the app's helper (the SDK's constructEvent on the raw body). */
   events(list?: Received[]): Stripe.Event[];
   admin(path: string, body?: unknown, method?: string): Promise<{ status: number; json: any }>;
   close(): Promise<void>;
@@ -35,7 +35,7 @@ export async function startStripeRig(overrides: Partial<StripeFakeOptions> = {})
     hooks,
     stripe,
     secret,
-    events: (list = hooks.received) => list.map((r) => stripe.webhooks.constructEvent(r.raw, r.signature, secret)),
+    events: (list = hooks.received) => list.map((r) => verifyStripeWebhook(r.raw, r.signature, settings)),
     async admin(path, body, method = body === undefined ? "GET" : "POST") {
       const res = await fetch(`${fake.url}${path}`, {
         method,
