@@ -30,6 +30,8 @@ describe("Stripe fake: checkout", () => {
 
     const again = await rig.stripe.checkout.sessions.retrieve(s.id, { expand: ["line_items"] });
     expect(again.line_items?.data[0]).toMatchObject({ quantity: 1, amount_total: 125_000, description: "Deposit: commission FH-0012" });
+    // The fake's overview page lists it.
+    expect(await (await fetch(`${rig.fake.url}/`)).text()).toContain(s.id.slice(0, 22));
   });
 
   it("pays with a succeeding card: redirect to success_url, signed webhooks, payment intent, charge and fee", async () => {
@@ -111,6 +113,13 @@ describe("Stripe fake: checkout", () => {
     const late = await fetch(s.url!, { method: "POST", body: new URLSearchParams({ card_number: CARD_OK }), redirect: "manual" });
     expect(late.status).toBe(410);
     await expect(rig.stripe.checkout.sessions.expire(s.id)).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
+  });
+
+  it("a session whose expires_at passes expires by itself", async () => {
+    const s = await depositSession(rig.stripe, 10_000, { expires_at: Math.floor(Date.now() / 1000) + 1 });
+    const [e] = rig.events(await rig.hooks.waitFor(1, 5000));
+    expect(e!.type).toBe("checkout.session.expired");
+    expect((e!.data.object as Stripe.Checkout.Session).id).toBe(s.id);
   });
 
   it("rejects bad create parameters the way the API does, naming the parameter", async () => {

@@ -4,7 +4,7 @@
 import Stripe from "stripe";
 import { beforeEach, describe, expect, it } from "vitest";
 import { pause } from "./helpers/webhook-listener";
-import { CARD_OK, depositSession, payOnHostedPage, useStripeRig, type StripeRig } from "./helpers/stripe-setup";
+import { CARD_OK, depositSession, payOnHostedPage, startStripeRig, useStripeRig, type StripeRig } from "./helpers/stripe-setup";
 
 const rigs = useStripeRig();
 let rig: StripeRig;
@@ -90,6 +90,24 @@ describe("Stripe fake: refunds, balance and payouts", () => {
     expect((await rig.admin("/admin/payouts/run", {})).json.data).toEqual([]);
     const balance = await rig.stripe.balance.retrieve();
     expect(balance.available).toEqual([{ amount: 0, currency: "eur", source_types: { card: 0 } }]);
+  });
+
+  it("balances become available after the configured delay, and automatic payouts pick them up", async () => {
+    const slow = await startStripeRig({ availableAfterSeconds: 1, payoutEverySeconds: 1 });
+    try {
+      const s = await depositSession(slow.stripe, 30_000);
+      expect((await payOnHostedPage(s.url!, CARD_OK)).status).toBe(303);
+      const [txn] = (await slow.stripe.balanceTransactions.list({ type: "charge" })).data;
+      expect(txn).toMatchObject({ status: "pending" });
+      expect(txn!.available_on).toBe(txn!.created + 1);
+      const deadline = Date.now() + 6000;
+      while (!slow.events().some((e) => e.type === "payout.paid") && Date.now() < deadline) await pause(50);
+      const paid = slow.events().find((e) => e.type === "payout.paid")!.data.object as Stripe.Payout;
+      expect(paid).toMatchObject({ automatic: true, amount: txn!.net, currency: "eur" });
+      expect((await slow.stripe.balanceTransactions.retrieve(txn!.id)).status).toBe("available");
+    } finally {
+      await slow.close();
+    }
   });
 
   it("pages balance transactions like the API: limit, has_more, starting_after, ending_before, auto-paging", async () => {
