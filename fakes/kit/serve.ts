@@ -84,11 +84,12 @@ export class Outage {
     }
   }
 
-  end(): void {
+  /** Ends the outage; `relisten: false` when the server is being shut down anyway. */
+  end(relisten = true): void {
     if (this.timer) clearTimeout(this.timer);
     this.timer = null;
     const r = this.running();
-    if (this.mode === "refuse" && r && !r.server.listening) r.server.listen(r.port, "127.0.0.1");
+    if (relisten && this.mode === "refuse" && r && !r.server.listening) r.server.listen(r.port, "127.0.0.1");
     this.mode = "none";
     this.until = null;
   }

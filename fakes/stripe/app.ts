@@ -101,7 +101,7 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     webhooks,
     async close() {
       clearInterval(clock);
-      outage.end();
+      outage.end(false);
       await webhooks.stop();
       store.flush();
       await server.close();

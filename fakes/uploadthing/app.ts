@@ -68,7 +68,7 @@ export async function startUploadthingFake(opts: UploadthingFakeOptions): Promis
     port: server.port,
     ctx,
     async close() {
-      outage.end();
+      outage.end(false);
       for (const s of ctx.devStreams.values()) s.res.end();
       store.flush();
       await server.close();
