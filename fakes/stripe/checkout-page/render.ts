@@ -12,7 +12,6 @@ header { background:var(--band); color:#fff; padding:14px 24px; display:flex; ga
 header strong { letter-spacing:.04em; }
 .badge { background:repeating-linear-gradient(45deg,var(--accent),var(--accent) 8px,#e9a15a 8px,#e9a15a 16px); color:#1d1307; font-weight:700; font-size:12px; padding:3px 10px; border-radius:3px; text-transform:uppercase; }
 main { max-width:920px; margin:24px auto; padding:0 16px; display:grid; grid-template-columns: 1fr 1fr; gap:20px; }
-@media (max-width: 720px) { main { grid-template-columns: 1fr; } }
 section { background:#fff; border:1px solid var(--line); border-radius:6px; padding:20px; align-self:start; }
 h1 { font-size:20px; margin:0 0 12px; } h2 { font-size:16px; margin:0 0 10px; }
 .total { font: 600 28px/1.2 ui-monospace, "SFMono-Regular", Menlo, monospace; margin:8px 0 16px; }
@@ -32,6 +31,7 @@ a.cancel { display:inline-block; margin-top:12px; color:var(--muted); }
 table { width:100%; border-collapse:collapse; font-size:14px; } td { padding:4px 6px; border-top:1px solid var(--line); vertical-align:middle; }
 td.mono { white-space:nowrap; } td button { border:1px solid var(--line); background:var(--paper); padding:2px 8px; }
 .note { color:var(--muted); font-size:13px; }
+@media (max-width: 720px) { main { grid-template-columns: 1fr; } td.mono { white-space:normal; } }
 `;
 
 function layout(title: string, body: string): string {
