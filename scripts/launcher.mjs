@@ -9,7 +9,7 @@
 //          ports, build and serve a test app, run Vitest, then the browser tests; exit with their status
 import { spawn, spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { ROOT, readEnv } from "./env.mjs";
 import { servicesFor, testOverrides } from "./services.mjs";
@@ -145,8 +145,10 @@ async function main() {
   startDatabase(env);
 
   if (mode === "test") {
-    // The test database is rebuilt from nothing on every run: down to zero, then up.
+    // The test database is rebuilt from nothing on every run: down to zero, then up; the fakes'
+    // test state goes with it, so no webhook or e-mail from an earlier run is still in flight.
     tsx("db/cli.ts", ["fresh"], { ...env, KNEX_ENV: "test" }, "test migrations");
+    rmSync(join(ROOT, env.FAKES_DATA_DIR), { recursive: true, force: true });
   } else {
     tsx("db/cli.ts", ["migrate"], { ...env, KNEX_ENV: "development" }, "migrations");
     tsx("db/cli.ts", ["seed"], { ...env, KNEX_ENV: "development" }, "demo seed");
