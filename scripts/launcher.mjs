@@ -10,7 +10,7 @@
 import { spawn, spawnSync } from "node:child_process";
 import { createHash } from "node:crypto";
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { join } from "node:path";
+import { join, resolve } from "node:path";
 import { ROOT, readEnv } from "./env.mjs";
 import { servicesFor, testOverrides } from "./services.mjs";
 
@@ -148,7 +148,7 @@ async function main() {
     // The test database is rebuilt from nothing on every run: down to zero, then up; the fakes'
     // test state goes with it, so no webhook or e-mail from an earlier run is still in flight.
     tsx("db/cli.ts", ["fresh"], { ...env, KNEX_ENV: "test" }, "test migrations");
-    rmSync(join(ROOT, env.FAKES_DATA_DIR), { recursive: true, force: true });
+    rmSync(resolve(ROOT, env.FAKES_DATA_DIR), { recursive: true, force: true });
   } else {
     tsx("db/cli.ts", ["migrate"], { ...env, KNEX_ENV: "development" }, "migrations");
     tsx("db/cli.ts", ["seed"], { ...env, KNEX_ENV: "development" }, "demo seed");
