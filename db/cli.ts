@@ -8,6 +8,15 @@ const env = (process.env.KNEX_ENV ?? "development") as keyof typeof config;
 const command = process.argv[2] ?? "migrate";
 const k = knexFactory(config[env]);
 
+async function dropAllTables() {
+  const [rows] = await k.raw("SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE()");
+  await k.transaction(async (trx) => {
+    await trx.raw("SET FOREIGN_KEY_CHECKS = 0");
+    for (const { t } of rows as Array<{ t: string }>) await trx.raw("DROP TABLE IF EXISTS ??", [t]);
+    await trx.raw("SET FOREIGN_KEY_CHECKS = 1");
+  });
+}
+
 async function main() {
   switch (command) {
     case "migrate": {
@@ -27,7 +36,9 @@ async function main() {
     }
     case "fresh":
     case "reset": {
-      await k.migrate.rollback(undefined, true);
+      // Drop every table rather than roll back: a renamed or removed migration file must not
+      // leave the database stuck.
+      await dropAllTables();
       await k.migrate.latest();
       if (command === "reset") await k.seed.run();
       console.log(`[db] ${env}: database ${command === "reset" ? "reset to the demo data" : "migrated fresh"}`);
