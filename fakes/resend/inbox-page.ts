@@ -37,7 +37,7 @@ export function inboxPage(messages: StoredMessage[], to?: string): string {
 /** Every http(s) link in an HTML body, in order, without repeats. */
 export function linksIn(html: string): string[] {
   const out: string[] = [];
-  for (const m of html.matchAll(/href="(https?:[^"]+)"/g)) {
+  for (const m of html.matchAll(/href=["'](https?:[^"']+)["']/g)) {
     const href = m[1]!.replace(/&amp;/g, "&");
     if (!out.includes(href)) out.push(href);
   }
@@ -46,8 +46,8 @@ export function linksIn(html: string): string[] {
 
 export function messagePage(m: StoredMessage): string {
   const links = m.html ? linksIn(m.html) : [];
-  // <base target="_top"> makes links inside the frame open in the whole tab (the sandbox allows
-  // top navigation only on a click).
+  // Links without a target open in the whole tab (<base target="_top">); the templates' buttons
+  // open a new tab as in a mail client, outside the frame's sandbox.
   const framed = m.html ? m.html.replace(/<head([^>]*)>/i, `<head$1><base target="_top">`) : "";
   return page(
     m.subject,
@@ -55,7 +55,7 @@ export function messagePage(m: StoredMessage): string {
      <h1>${esc(m.subject)}</h1>
      <p class="muted">From ${esc(m.from)} to ${esc(m.to.join(", "))} · ${esc(m.createdAt)} · id ${esc(m.id)}</p>
      ${links.length ? `<h2>Links in this e-mail</h2><ul class="links">${links.map((l) => `<li><a href="${esc(l)}">${esc(l)}</a></li>`).join("")}</ul>` : ""}
-     ${m.html ? `<h2>As the recipient sees it</h2><iframe title="E-mail body" sandbox="allow-top-navigation-by-user-activation allow-popups" srcdoc="${esc(framed)}"></iframe>` : ""}
+     ${m.html ? `<h2>As the recipient sees it</h2><iframe title="E-mail body" sandbox="allow-top-navigation-by-user-activation allow-popups allow-popups-to-escape-sandbox" srcdoc="${esc(framed)}"></iframe>` : ""}
      ${m.text ? `<h2>Plain text</h2><pre>${esc(m.text)}</pre>` : ""}`,
   );
 }

@@ -54,7 +54,8 @@ export const authBaseConfig = {
     error(error) {
       const name = (error as { type?: string }).type ?? error.name;
       if (["CredentialsSignin", "Verification", "AccessDenied"].includes(name)) return;
-      console.error(`[auth] ${name}: ${error.message}`);
+      const cause = (error as { cause?: { err?: unknown } }).cause;
+      console.error(`[auth] ${name}: ${error.message}`, cause?.err ?? cause ?? "");
     },
     warn(code) {
       if (code !== "debug-enabled") console.warn(`[auth] warning ${code}`);

@@ -26,7 +26,7 @@ export function FailedEmails({ slug, messages }: { slug: string; messages: Outbo
     <Card className="border-ember-500">
       <CardHeader title="E-mail that could not be delivered" subtitle="The provider refused these after retrying. Check the address, then send again." />
       <div className="p-3">
-        <Table caption="Undelivered e-mail">
+        <Table caption="Undelivered e-mail" className="min-w-[36rem]">
           <THead>
             <tr>
               <Th>To</Th>
@@ -38,7 +38,7 @@ export function FailedEmails({ slug, messages }: { slug: string; messages: Outbo
           <TBody>
             {messages.map((m) => (
               <tr key={m.id}>
-                <Td className="break-all">{m.to}</Td>
+                <Td className="break-words">{m.to}</Td>
                 <Td>{m.subject}</Td>
                 <Td className="text-xs text-graphite-600">{m.lastError}</Td>
                 <Td className="text-right">

@@ -38,7 +38,7 @@ export function InvitationsTable({ slug, invitations }: { slug: string; invitati
   return (
     <div className="space-y-3 p-3">
       {error ? <Alert tone="error">{error}</Alert> : null}
-      <Table caption="Invitations">
+      <Table caption="Invitations" className="min-w-[36rem]">
         <THead>
           <tr>
             <Th>E-mail</Th>
@@ -51,12 +51,12 @@ export function InvitationsTable({ slug, invitations }: { slug: string; invitati
         <TBody>
           {invitations.map((i) => (
             <tr key={i.id}>
-              <Td className="break-all">{i.email}</Td>
+              <Td className="break-words">{i.email}</Td>
               <Td>{ROLE_LABELS[i.role]}</Td>
               <Td>
                 <Badge tone={STATE[i.state].tone}>{STATE[i.state].label}</Badge>
               </Td>
-              <Td className="font-mono text-xs">{day(i.expiresAt)}</Td>
+              <Td className="font-mono text-xs whitespace-nowrap">{day(i.expiresAt)}</Td>
               <Td className="text-right">
                 {i.state === "pending" ? (
                   <Button variant="ghost" size="sm" disabled={pending} onClick={() => revoke(i.id)} aria-label={`Withdraw the invitation to ${i.email}`}>

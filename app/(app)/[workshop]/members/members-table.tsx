@@ -44,7 +44,7 @@ export function MembersTable({ slug, members, manage, selfMembershipId }: { slug
   return (
     <div className="space-y-3 p-3">
       {error ? <Alert tone="error">{error}</Alert> : null}
-      <Table caption="Members">
+      <Table caption="Members" className="min-w-[36rem]">
         <THead>
           <tr>
             <Th>Name</Th>
@@ -60,7 +60,7 @@ export function MembersTable({ slug, members, manage, selfMembershipId }: { slug
                 {m.name}
                 {m.id === selfMembershipId ? <span className="ml-2 text-xs font-normal text-graphite-500">(you)</span> : null}
               </Td>
-              <Td className="break-all">{m.email}</Td>
+              <Td className="break-words">{m.email}</Td>
               <Td>
                 {manage ? (
                   <Select
@@ -69,7 +69,7 @@ export function MembersTable({ slug, members, manage, selfMembershipId }: { slug
                     disabled={pending}
                     onChange={(e) => changeRole(m, e.target.value as Role)}
                     options={ROLE_OPTIONS}
-                    className="w-36"
+                    className="min-w-32"
                   />
                 ) : (
                   <Badge tone={m.role === "owner" ? "primary" : "neutral"}>{ROLE_LABELS[m.role]}</Badge>

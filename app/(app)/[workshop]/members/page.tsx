@@ -48,13 +48,13 @@ export default async function MembersPage({ params }: { params: Promise<{ worksh
       </Card>
       {manage ? (
         <div className="grid gap-6 lg:grid-cols-[2fr_3fr]">
-          <Card>
+          <Card className="min-w-0">
             <CardHeader title="Invite someone" subtitle="They get an e-mail with a link that works once, for 7 days." />
             <CardBody>
               <InviteForm slug={slug} />
             </CardBody>
           </Card>
-          <Card>
+          <Card className="min-w-0">
             <CardHeader title="Invitations" subtitle="Pending ones, and those of the last 30 days" />
             <InvitationsTable slug={slug} invitations={invitations} />
           </Card>
