@@ -104,3 +104,26 @@ test("the members page and the switcher fit a phone", async ({ page }) => {
   await expect(page.getByRole("link", { name: "+ Create a workshop" })).toBeVisible();
   await keepScreenshot(page, "members-phone");
 });
+
+test("a new person signs up, creates a workshop and becomes its owner", async ({ page }) => {
+  const email = uniqueEmail("founder");
+  await page.goto("/sign-up");
+  await page.getByLabel("Your name").fill("Founding Maker");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("short");
+  await page.getByRole("button", { name: "Create the account" }).click();
+  await expect(page.getByText("Use at least 10 characters.")).toBeVisible();
+  await page.getByLabel("Password").fill("a-long-enough-password");
+  await page.getByRole("button", { name: "Create the account" }).click();
+  await expect(page).toHaveURL(/\/workshops\/new$/);
+  const name = `Founders Bench ${Date.now()}`;
+  await page.getByLabel("Workshop name").fill(name);
+  // The address follows the name until edited.
+  await expect(page.getByLabel("Address")).toHaveValue(name.toLowerCase().replace(/ /g, "-"));
+  await page.getByLabel("Lengths shown in").selectOption("in");
+  await page.getByLabel("Currency").selectOption("USD");
+  await page.getByRole("button", { name: "Create the workshop" }).click();
+  await expect(page.getByRole("heading", { level: 1, name })).toBeVisible();
+  await expect(page.getByText("You: Owner")).toBeVisible();
+  await expect(page.getByText("Inches")).toBeVisible();
+});

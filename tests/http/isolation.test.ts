@@ -110,4 +110,17 @@ describe("cross-workshop isolation", () => {
     const me = await s.json<{ memberships: Array<{ role: string; workshop: { slug: string } }> }>("/api/me");
     expect(me.body.memberships.map((m) => [m.workshop.slug, m.role]).sort()).toEqual([[a.slug, "client"], [b.slug, "owner"]].sort());
   });
+
+  it("makes the creator of a workshop its only owner, and refuses a taken address with the field path", async () => {
+    const slug = `made-${a.id}-${Date.now() % 100000}`;
+    const created = await ownerA.json<{ workshop: { slug: string }; role: string }>("/api/workshops", { json: { name: "Made Here", slug, unitPreference: "in", currency: "usd" } });
+    expect(created).toEqual({ status: 201, body: { workshop: { slug, name: "Made Here" }, role: "owner" } });
+    const members = await ownerA.json<{ members: Array<{ email: string; role: string }> }>(`/api/workshops/${slug}/members`);
+    expect(members.body.members).toEqual([expect.objectContaining({ email: a.owner.email, role: "owner" })]);
+    const taken = await ownerB.json<{ error: { issues: Array<{ path: string }> } }>("/api/workshops", { json: { name: "Copy", slug, unitPreference: "mm", currency: "EUR" } });
+    expect(taken.status).toBe(409);
+    expect(taken.body.error.issues.map((i) => i.path)).toEqual(["slug"]);
+    // B's owner did not become a member of it by trying.
+    expect((await ownerB.fetch(`/api/workshops/${slug}/members`)).status).toBe(404);
+  });
 });
