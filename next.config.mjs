@@ -7,6 +7,8 @@ const nextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
   typedRoutes: false,
+  // forbidden() and app/forbidden.tsx: a real 403 page for a member whose role lacks a permission.
+  experimental: { authInterrupts: true },
 };
 
 export default nextConfig;

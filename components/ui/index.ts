@@ -1,3 +1,4 @@
+export { Alert, type AlertTone } from "./alert";
 export { Badge, type BadgeTone } from "./badge";
 export { Button, buttonClasses, type ButtonProps } from "./button";
 export { Card, CardBody, CardHeader } from "./card";

@@ -1,6 +1,8 @@
 // The invented demo scenario: two workshops and their people. Every name here is made up;
 // every address is at example.com.
-export type DemoRole = "owner" | "builder" | "bookkeeper" | "client";
+import type { Role } from "../auth/permissions";
+
+export type DemoRole = Role;
 
 export interface DemoWorkshop {
   slug: string;

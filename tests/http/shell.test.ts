@@ -1,6 +1,11 @@
 // The built app, served by next start: landing page, 404 page, health and security headers.
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
+import { closeTestDb } from "../setup/test-db";
 import { appUrl } from "./app-url";
+import { createTestUser } from "./fixtures";
+import { signIn } from "./session";
+
+afterAll(closeTestDb);
 
 describe("app shell over HTTP", () => {
   it("serves the landing page with security headers", async () => {
@@ -23,8 +28,9 @@ describe("app shell over HTTP", () => {
     }
   });
 
-  it("answers an unknown page with the 404 page", async () => {
-    const res = await fetch(appUrl("/no-such-page"));
+  it("answers an unknown page with the 404 page (signed in: signed out, any app path leads to sign-in)", async () => {
+    const session = await signIn(await createTestUser());
+    const res = await session.fetch("/no-such-page");
     expect(res.status).toBe(404);
     expect(await res.text()).toMatch(/Nothing here/);
   });

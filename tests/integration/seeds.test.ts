@@ -1,6 +1,8 @@
 // The demo seed is idempotent: a second run adds and changes nothing.
 import type { Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { verifyPassword } from "../../lib/auth/password";
+import { DEMO_PEOPLE } from "../../lib/demo/people";
 import { createScratchDatabase } from "../setup/db";
 
 let knex: Knex;
@@ -48,5 +50,15 @@ describe("demo seed", () => {
     expect(multi.length).toBe(1);
     const emails = (await knex("users").pluck("email")) as string[];
     for (const e of emails) expect(e).toMatch(/@example\.com$/);
+  });
+
+  it("gives every demo person the DEMO_PASSWORD, hashed with argon2id", async () => {
+    const rows = await knex("users").whereIn("email", DEMO_PEOPLE.map((p) => p.email)).select("email", "password_hash");
+    expect(rows).toHaveLength(DEMO_PEOPLE.length);
+    const password = process.env.DEMO_PASSWORD ?? "luthier-demo-2027";
+    for (const r of rows as Array<{ email: string; password_hash: string }>) {
+      expect(r.password_hash, r.email).toMatch(/^\$argon2id\$/);
+      expect(await verifyPassword(r.password_hash, password), r.email).toBe(true);
+    }
   });
 });

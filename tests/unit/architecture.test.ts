@@ -25,6 +25,33 @@ describe("architecture", () => {
     expect(offenders).toEqual([]);
   });
 
+  it("mints workshop scopes only in the authorization helper", () => {
+    const minters = sources.filter((f) => /mintWorkshopScope/.test(readFileSync(join(root, f), "utf8")));
+    expect(minters.sort()).toEqual(["lib/auth/scope.ts", "lib/auth/workshop-access.ts"]);
+  });
+
+  it("authorises every workshop route through withWorkshop and never calls auth() in a handler", () => {
+    const routes = sources.filter((f) => /^app\/api\/.*route\.ts$/.test(f));
+    expect(routes.length).toBeGreaterThan(5);
+    for (const f of routes) {
+      const text = readFileSync(join(root, f), "utf8");
+      if (f.startsWith("app/api/workshops/[workshop]/")) expect(text, f).toMatch(/withWorkshop\(/);
+      expect(text, f).not.toMatch(/\bauth\(\)/);
+    }
+  });
+
+  it("gives every server action file an authorising wrapper", () => {
+    const actionFiles = sources.filter((f) => /^app\/.*actions\.ts$/.test(f));
+    expect(actionFiles.length).toBeGreaterThan(3);
+    for (const f of actionFiles) {
+      const text = readFileSync(join(root, f), "utf8");
+      const exported = text.match(/^export (const|async function) \w+/gm) ?? [];
+      const wrapped = text.match(/^export const \w+(: [^=]+)? =\s*(workshopAction|userAction|publicAction)\(/gm) ?? [];
+      const signOutOnly = text.match(/^export async function signOutAction/gm) ?? [];
+      expect(wrapped.length + signOutOnly.length, f).toBe(exported.length);
+    }
+  });
+
   it("keeps lib/ domain modules free of React and the database", () => {
     const pure = sources.filter((f) => /^lib\/(lutherie|workflow|money)\//.test(f));
     for (const f of pure) {

@@ -1,0 +1,29 @@
+import type { ReactNode } from "react";
+import { Badge } from "@/components/ui/badge";
+import { WorkshopNav } from "@/components/workshop-nav";
+import { requireWorkshopPage } from "@/lib/auth/pages";
+import { ROLE_LABELS } from "@/lib/auth/permissions";
+
+// Every page of one workshop. Membership is checked here once per request (cached for the pages
+// below, which still check their own permission: layouts are not re-run on every navigation).
+export default async function WorkshopLayout({ children, params }: { children: ReactNode; params: Promise<{ workshop: string }> }) {
+  const { workshop: slug } = await params;
+  const { workshop, membership, can } = await requireWorkshopPage(slug);
+  const links = [
+    { href: `/${workshop.slug}`, label: "Home" },
+    ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
+  ];
+  return (
+    <div className="mx-auto max-w-6xl px-4 py-6 sm:px-6">
+      <div className="flex flex-wrap items-end justify-between gap-3 border-b border-spruce-200 pb-3">
+        <div>
+          <p className="text-xs font-semibold uppercase tracking-[0.2em] text-rosewood-700">Workshop</p>
+          <h1 className="text-2xl font-semibold sm:text-3xl">{workshop.name}</h1>
+        </div>
+        <Badge tone={membership.role === "owner" ? "primary" : "neutral"}>You: {ROLE_LABELS[membership.role]}</Badge>
+      </div>
+      <WorkshopNav links={links} />
+      <div className="pt-6">{children}</div>
+    </div>
+  );
+}

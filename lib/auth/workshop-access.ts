@@ -1,0 +1,50 @@
+// THE authorization check for workshop data. Every route handler, server action and server
+// component that touches a workshop's rows goes through resolveWorkshopAccess (directly or via
+// withWorkshop / workshopAction / requireWorkshopPage), and gets back the scope its data
+// functions need. The workshop id comes from the membership row, never from the request.
+import { cache } from "react";
+import { findMembershipBySlug, type WorkshopRecord } from "@/lib/data/memberships";
+import { forbidden, notFound } from "@/lib/http/errors";
+import { can, type Permission, type PermissionRequirement, type Role } from "./permissions";
+import { mintWorkshopScope, type WorkshopScope } from "./scope";
+import { requireUser, type SignedInUser } from "./session";
+
+export interface WorkshopContext {
+  user: SignedInUser;
+  membership: { id: number; role: Role };
+  workshop: WorkshopRecord;
+  /** Pass to every lib/data function that reads or writes this workshop's rows. */
+  scope: WorkshopScope;
+  /** Whether the caller's role holds a permission (for role-dependent answers, e.g. names only). */
+  can: (permission: Permission | readonly Permission[]) => boolean;
+}
+
+const NO_SUCH_WORKSHOP = "No such workshop.";
+
+// One membership lookup per request, however many layouts and pages ask.
+const loadWorkshopContext = cache(async (slug: string): Promise<WorkshopContext> => {
+  const user = await requireUser();
+  if (typeof slug !== "string" || slug.length === 0 || slug.length > 64) throw notFound(NO_SUCH_WORKSHOP);
+  const m = await findMembershipBySlug(user.id, slug);
+  // Not a member and no such workshop look the same: both 404.
+  if (!m) throw notFound(NO_SUCH_WORKSHOP);
+  const scope = mintWorkshopScope({ workshopId: m.workshop.id, membershipId: m.membershipId, userId: user.id, role: m.role });
+  return {
+    user,
+    membership: { id: m.membershipId, role: m.role },
+    workshop: m.workshop,
+    scope,
+    can: (p) => can(m.role, p),
+  };
+});
+
+/**
+ * Resolves the signed-in user's membership of the workshop `slug` and checks the permission.
+ * Throws AppError: "unauthenticated" (not signed in), "not_found" (no such workshop, or not a
+ * member of it), "forbidden" (a member whose role lacks the permission).
+ */
+export async function resolveWorkshopAccess(slug: string, required?: PermissionRequirement): Promise<WorkshopContext> {
+  const ctx = await loadWorkshopContext(slug);
+  if (required && !ctx.can(required)) throw forbidden();
+  return ctx;
+}
