@@ -10,6 +10,8 @@
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+# Same settings as every other entry point: .env.example, then .env, then the real environment.
+if command -v node >/dev/null; then eval "$(node "$ROOT/scripts/print-env.mjs" 'DB_*' DATA_DIR)"; fi
 DATA_ROOT="${DATA_DIR:-.data}"
 # A relative DATA_DIR (as in .env.example) is relative to the project, not to mariadbd's cwd.
 case "$DATA_ROOT" in /*) ;; *) DATA_ROOT="$ROOT/$DATA_ROOT" ;; esac
