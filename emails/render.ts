@@ -3,6 +3,17 @@
 import { render, toPlainText } from "@react-email/render";
 import { createElement, type FunctionComponent, type ReactElement } from "react";
 import { parseTemplateProps, type TemplateName, type TemplateProps } from "@/lib/outbox/templates";
+import {
+  BuildStartedEmail,
+  CancelledEmail,
+  DeliveredEmail,
+  DepositRequestedEmail,
+  FinalSetupEmail,
+  OnHoldEmail,
+  ResumedEmail,
+  SpecReadyEmail,
+  StageProgressEmail,
+} from "./commission/kinds";
 import { InvitationEmail } from "./invitation";
 import { MagicLinkEmail } from "./magic-link";
 import { PasswordResetEmail } from "./password-reset";
@@ -11,6 +22,15 @@ const COMPONENTS: { [T in TemplateName]: (props: TemplateProps<T>) => ReactEleme
   invitation: InvitationEmail,
   "magic-link": MagicLinkEmail,
   "password-reset": PasswordResetEmail,
+  "spec-ready": SpecReadyEmail,
+  "deposit-requested": DepositRequestedEmail,
+  "build-started": BuildStartedEmail,
+  "stage-progress": StageProgressEmail,
+  "final-setup": FinalSetupEmail,
+  delivered: DeliveredEmail,
+  "on-hold": OnHoldEmail,
+  resumed: ResumedEmail,
+  cancelled: CancelledEmail,
 };
 
 export async function renderEmail<T extends TemplateName>(template: T, rawProps: unknown): Promise<{ html: string; text: string }> {

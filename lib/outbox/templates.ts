@@ -7,7 +7,29 @@ import { ROLE_LABELS, ROLES } from "@/lib/auth/permissions";
 const url = z.url({ protocol: /^https?$/ });
 const isoTime = z.iso.datetime();
 
+/** What every commission e-mail to a client carries. */
+const commissionUpdate = z.object({
+  workshopName: z.string(),
+  clientName: z.string(),
+  commissionNumber: z.string(),
+  commissionTitle: z.string(),
+  stageLabel: z.string(),
+  note: z.string().optional(),
+  commissionUrl: url,
+});
+type CommissionUpdate = z.infer<typeof commissionUpdate>;
+const about = (p: CommissionUpdate) => `${p.commissionNumber} ${p.commissionTitle}`;
+
 export const EMAIL_TEMPLATES = {
+  "spec-ready": { props: commissionUpdate, subject: (p: CommissionUpdate) => `Your spec is ready to approve: ${about(p)}` },
+  "deposit-requested": { props: commissionUpdate, subject: (p: CommissionUpdate) => `Spec approved, deposit due: ${about(p)}` },
+  "build-started": { props: commissionUpdate, subject: (p: CommissionUpdate) => `Your build has started: ${about(p)}` },
+  "stage-progress": { props: commissionUpdate, subject: (p: CommissionUpdate) => `${p.stageLabel}: ${about(p)}` },
+  "final-setup": { props: commissionUpdate, subject: (p: CommissionUpdate) => `Final setup under way: ${about(p)}` },
+  delivered: { props: commissionUpdate.extend({ setupSummary: z.array(z.string()).default([]) }), subject: (p: CommissionUpdate) => `Delivered: ${about(p)}` },
+  "on-hold": { props: commissionUpdate, subject: (p: CommissionUpdate) => `On hold: ${about(p)}` },
+  resumed: { props: commissionUpdate, subject: (p: CommissionUpdate) => `Work resumed: ${about(p)}` },
+  cancelled: { props: commissionUpdate, subject: (p: CommissionUpdate) => `Cancelled: ${about(p)}` },
   invitation: {
     props: z.object({
       workshopName: z.string(),

@@ -1,0 +1,229 @@
+// Commissions: list, read, open, change. Every query starts from visibleCommissions(scope).
+import { db } from "@/db/knex";
+import type { WorkshopScope } from "@/lib/auth/scope";
+import { AppError, forbidden } from "@/lib/http/errors";
+import { money, percentOf } from "@/lib/money/money";
+import type { CommissionCreate, CommissionListQuery, CommissionPatch } from "@/lib/schemas/commission";
+import type { CommissionPage, CommissionSummary } from "@/lib/schemas/commission-out";
+import { formatCommissionNumber } from "@/lib/workflow/commission-number";
+import { CANCELLED, DELIVERED, SPEC, stageLabel, stageLine, type BuildStage } from "@/lib/workflow/stages";
+import { writeAudit } from "./audit";
+import { getVisibleCommissionRow, visibleCommissions, type CommissionRow } from "./commission-access";
+import { inTransaction, iso, type Trx } from "./transaction";
+import { getWorkshopSettings } from "./workshop-settings";
+
+type Row = CommissionRow & { client_name: string; builder_name: string | null };
+
+const SELECT = ["c.*", "cu.name as client_name", "bu.name as builder_name"];
+
+function withPeople(q: ReturnType<typeof visibleCommissions>) {
+  return q.join("users as cu", "cu.id", "c.client_user_id").leftJoin("users as bu", "bu.id", "c.builder_user_id");
+}
+
+const dateOnly = (d: Date | string | null): string | null => (d === null ? null : typeof d === "string" ? d.slice(0, 10) : d.toISOString().slice(0, 10));
+
+const todayUtc = () => new Date().toISOString().slice(0, 10);
+
+/** The one mapping from a row to what a caller with this scope may see. */
+export function toSummary(scope: WorkshopScope, r: Row, template: readonly BuildStage[]): CommissionSummary {
+  const stage = scope.role === "client" ? r.client_stage : r.stage;
+  const target = dateOnly(r.target_date);
+  return {
+    id: r.id,
+    number: r.number,
+    title: r.title,
+    stage,
+    stageLabel: stageLabel(stage, template),
+    heldFrom: r.held_from,
+    stageEnteredAt: iso(r.stage_entered_at),
+    awaitingSignoff: scope.role !== "client" && r.stage !== r.client_stage,
+    client: { id: r.client_user_id, name: r.client_name },
+    builder: r.builder_user_id ? { id: r.builder_user_id, name: r.builder_name ?? "" } : null,
+    money:
+      scope.role === "builder"
+        ? null
+        : { currency: r.currency, priceMinor: Number(r.price_minor), depositMinor: Number(r.deposit_minor), depositPercent: Number(r.deposit_percent) },
+    targetDate: target,
+    overdue: target !== null && target < todayUtc() && r.stage !== DELIVERED && r.stage !== CANCELLED,
+    createdAt: iso(r.created_at),
+    updatedAt: iso(r.updated_at),
+  };
+}
+
+const SORT_COLUMNS = {
+  number: "c.number",
+  title: "c.title",
+  targetDate: "c.target_date",
+  updated: "c.updated_at",
+} as const;
+
+/** A page of the commissions the caller may see, filtered, searched and sorted. */
+export async function listCommissions(scope: WorkshopScope, query: CommissionListQuery): Promise<CommissionPage> {
+  const settings = await getWorkshopSettings(scope);
+  const stageColumn = scope.role === "client" ? "c.client_stage" : "c.stage";
+  const base = visibleCommissions(scope);
+  if (query.stage) base.whereIn(stageColumn, query.stage.split(",").filter(Boolean));
+  if (query.builder === "none") base.whereNull("c.builder_user_id");
+  else if (query.builder !== undefined) base.where("c.builder_user_id", query.builder);
+  if (query.client !== undefined) base.where("c.client_user_id", query.client);
+  if (query.overdue !== undefined) {
+    const overdue = (q: typeof base) => q.whereNotNull("c.target_date").where("c.target_date", "<", todayUtc()).whereNotIn("c.stage", [DELIVERED, CANCELLED]);
+    if (query.overdue) overdue(base);
+    else base.whereNot((q) => void overdue(q));
+  }
+  if (query.q) {
+    const like = `%${query.q.replace(/[\\%_]/g, (m) => `\\${m}`)}%`;
+    base.where((q) => q.where("c.title", "like", like).orWhere("c.number", "like", like));
+  }
+
+  const countRow = await base.clone().count({ n: "*" }).first();
+  const total = Number(countRow?.n ?? 0);
+
+  const desc = query.sort.startsWith("-");
+  const key = query.sort.replace(/^-/, "") as keyof typeof SORT_COLUMNS | "stage";
+  const rowsQ = withPeople(base).select(SELECT);
+  if (key === "stage") {
+    // Stage order is the workshop's own line, not the alphabet.
+    const line = [...stageLine(settings.buildStages), "on_hold", "cancelled"];
+    rowsQ.orderByRaw(desc ? "FIND_IN_SET(??, ?) DESC" : "FIND_IN_SET(??, ?) ASC", [stageColumn, line.join(",")]);
+  } else {
+    rowsQ.orderBy(SORT_COLUMNS[key], desc ? "desc" : "asc");
+  }
+  rowsQ.orderBy("c.id", desc ? "desc" : "asc");
+  const rows = (await rowsQ.limit(query.pageSize).offset((query.page - 1) * query.pageSize)) as Row[];
+  return { items: rows.map((r) => toSummary(scope, r, settings.buildStages)), total, page: query.page, pageSize: query.pageSize };
+}
+
+/** One commission as the caller may see it (404 otherwise). */
+export async function getCommissionSummary(scope: WorkshopScope, id: number, trx?: Trx): Promise<CommissionSummary> {
+  await getVisibleCommissionRow(scope, id, { trx });
+  const row = (await withPeople(visibleCommissions(scope, trx)).where("c.id", id).first(SELECT)) as Row;
+  const settings = await getWorkshopSettings(scope, trx);
+  return toSummary(scope, row, settings.buildStages);
+}
+
+async function memberRole(trx: Trx, scope: WorkshopScope, userId: number): Promise<string | null> {
+  const m = await trx("memberships").where({ workshop_id: scope.workshopId, user_id: userId }).first("role");
+  return m?.role ?? null;
+}
+
+/** A builder assignment must name a builder (or the owner) of this workshop. */
+async function checkBuilder(trx: Trx, scope: WorkshopScope, builderId: number | null | undefined) {
+  if (builderId === null || builderId === undefined) return;
+  const role = await memberRole(trx, scope, builderId);
+  if (role !== "builder" && role !== "owner") {
+    throw new AppError("validation_failed", "Choose a builder of this workshop.", [{ path: "builderId", message: "Not a builder of this workshop." }]);
+  }
+}
+
+/** Takes the next number of the year for this workshop under a row lock. */
+async function nextNumber(trx: Trx, workshopId: number, year: number): Promise<string> {
+  await trx("commission_counters").insert({ workshop_id: workshopId, year, last_sequence: 0 }).onConflict(["workshop_id", "year"]).ignore();
+  const row = await trx("commission_counters").where({ workshop_id: workshopId, year }).forUpdate().first("last_sequence");
+  const next = Number(row.last_sequence) + 1;
+  await trx("commission_counters").where({ workshop_id: workshopId, year }).update({ last_sequence: next });
+  return formatCommissionNumber(year, next);
+}
+
+/**
+ * Opens a commission in the spec stage. A client opens a request for themselves; the owner or a
+ * builder opens one for a client of the workshop.
+ */
+export async function createCommission(scope: WorkshopScope, input: CommissionCreate): Promise<CommissionSummary> {
+  return inTransaction(async (trx) => {
+    const settings = await getWorkshopSettings(scope, trx);
+    let clientId: number;
+    if (scope.role === "client") {
+      clientId = scope.userId;
+    } else {
+      if (!input.clientId) throw new AppError("validation_failed", "Choose the client.", [{ path: "clientId", message: "Required" }]);
+      if ((await memberRole(trx, scope, input.clientId)) !== "client") {
+        throw new AppError("validation_failed", "Choose a client of this workshop.", [{ path: "clientId", message: "Not a client of this workshop." }]);
+      }
+      clientId = input.clientId;
+    }
+    const builderId = scope.role === "builder" ? scope.userId : scope.role === "owner" ? (input.builderId ?? null) : null;
+    await checkBuilder(trx, scope, builderId);
+    // What a client asks for is a request: the workshop sets price and deposit.
+    const priceMinor = scope.role === "owner" ? input.priceMinor : 0;
+    const currency = scope.role === "owner" ? (input.currency ?? settings.currency) : settings.currency;
+    const depositPercent = scope.role === "owner" ? (input.depositPercent ?? settings.depositPercent) : settings.depositPercent;
+    const depositMinor = percentOf(money(priceMinor, currency), depositPercent).amountMinor;
+    const number = await nextNumber(trx, scope.workshopId, new Date().getUTCFullYear());
+    const [id] = await trx("commissions").insert({
+      workshop_id: scope.workshopId,
+      number,
+      client_user_id: clientId,
+      builder_user_id: builderId,
+      title: input.title,
+      price_minor: priceMinor,
+      deposit_minor: depositMinor,
+      deposit_percent: depositPercent,
+      currency,
+      target_date: scope.role === "client" ? null : (input.targetDate ?? null),
+      stage: SPEC,
+      client_stage: SPEC,
+      request_notes: input.requestNotes || null,
+    });
+    const commissionId = Number(id);
+    await trx("stage_history").insert({
+      workshop_id: scope.workshopId,
+      commission_id: commissionId,
+      from_stage: null,
+      to_stage: SPEC,
+      kind: "open",
+      actor_user_id: scope.userId,
+      client_notified_at: trx.fn.now(3),
+    });
+    await writeAudit(trx, { workshopId: scope.workshopId, actorUserId: scope.userId, action: "commission.opened", entityType: "commission", entityId: commissionId, data: { number } });
+    return getCommissionSummary(scope, commissionId, trx);
+  });
+}
+
+/** Changes a commission's fields; money is the owner's, and the deposit only before approval. */
+export async function updateCommission(scope: WorkshopScope, id: number, patch: CommissionPatch): Promise<CommissionSummary> {
+  return inTransaction(async (trx) => {
+    const row = await getVisibleCommissionRow(scope, id, { trx, forUpdate: true });
+    if (row.stage === DELIVERED || row.stage === CANCELLED) throw new AppError("conflict", "A delivered or cancelled commission cannot be changed.");
+    const moneyFields = ["priceMinor", "depositPercent", "depositMinor", "builderId"] as const;
+    if (scope.role !== "owner" && moneyFields.some((f) => patch[f] !== undefined)) {
+      throw forbidden("Only the owner can change the price, the deposit or the builder.");
+    }
+    const update: Record<string, unknown> = {};
+    if (patch.title !== undefined) update.title = patch.title;
+    if (patch.targetDate !== undefined) update.target_date = patch.targetDate;
+    if (patch.builderId !== undefined) {
+      await checkBuilder(trx, scope, patch.builderId);
+      update.builder_user_id = patch.builderId;
+    }
+    const touchesDeposit = patch.priceMinor !== undefined || patch.depositPercent !== undefined || patch.depositMinor !== undefined;
+    if (touchesDeposit) {
+      const approved = await trx("spec_versions").where({ workshop_id: scope.workshopId, commission_id: id }).whereNotNull("approved_at").first("id");
+      if (approved || row.stage !== SPEC) {
+        throw new AppError("conflict", "The price and deposit are fixed once the client has approved a spec; record a change in a comment instead.");
+      }
+      const price = patch.priceMinor ?? Number(row.price_minor);
+      const percent = patch.depositPercent ?? Number(row.deposit_percent);
+      const deposit = patch.depositMinor ?? percentOf(money(price, row.currency), percent).amountMinor;
+      if (deposit > price) throw new AppError("validation_failed", "The deposit cannot be more than the price.", [{ path: "depositMinor", message: "More than the price." }]);
+      Object.assign(update, { price_minor: price, deposit_percent: percent, deposit_minor: deposit });
+    }
+    await trx("commissions").where({ id, workshop_id: scope.workshopId }).update(update);
+    await writeAudit(trx, { workshopId: scope.workshopId, actorUserId: scope.userId, action: "commission.updated", entityType: "commission", entityId: id, data: patch });
+    return getCommissionSummary(scope, id, trx);
+  });
+}
+
+/** The people a commission form can choose from: the workshop's clients and builders. */
+export async function listCommissionPeople(scope: WorkshopScope): Promise<{ clients: Array<{ id: number; name: string }>; builders: Array<{ id: number; name: string }> }> {
+  const rows = await db("memberships as m")
+    .join("users as u", "u.id", "m.user_id")
+    .where("m.workshop_id", scope.workshopId)
+    .whereIn("m.role", ["client", "builder", "owner"])
+    .orderBy("u.name")
+    .select("u.id", "u.name", "m.role");
+  return {
+    clients: rows.filter((r: { role: string }) => r.role === "client").map((r: { id: number; name: string }) => ({ id: r.id, name: r.name })),
+    builders: rows.filter((r: { role: string }) => r.role !== "client").map((r: { id: number; name: string }) => ({ id: r.id, name: r.name })),
+  };
+}
