@@ -1,0 +1,65 @@
+import { hitRateLimit, type RateLimitDecision, type RateLimitRule } from "@/lib/data/rate-limit";
+import { AppError, isDatabaseUnavailable } from "./errors";
+
+// Per-client rate limiting for public route handlers, on the counters in lib/data/rate-limit.ts.
+
+/**
+ * The client's IP: the X-Forwarded-For entry TRUSTED_PROXY_HOPS places from the right (default 1,
+ * the last one). `next start` fills that header from the socket when no proxy sent one; behind a
+ * reverse proxy that appends the address it saw, 1 is still right; with two proxies, 2. A client
+ * talking straight to `next start` can send its own header, so run a proxy in front in production.
+ */
+export function clientIp(req: Request, hops = Number(process.env.TRUSTED_PROXY_HOPS ?? 1)): string {
+  const forwarded = req.headers.get("x-forwarded-for");
+  if (forwarded) {
+    const parts = forwarded.split(",").map((s) => s.trim()).filter(Boolean);
+    const pick = parts[Math.max(0, parts.length - Math.max(1, hops))];
+    if (pick) return pick.slice(0, 64);
+  }
+  return req.headers.get("x-real-ip")?.trim().slice(0, 64) || "unknown";
+}
+
+/** RateLimit-* headers (IETF draft names) describing a decision. */
+export function rateLimitHeaders(d: RateLimitDecision): Record<string, string> {
+  return {
+    "RateLimit-Limit": String(d.limit),
+    "RateLimit-Remaining": String(d.remaining),
+    "RateLimit-Reset": String(d.resetSeconds),
+  };
+}
+
+/** The 429 error, carrying the decision so the response can say when the window resets. */
+export class RateLimitedError extends AppError {
+  constructor(readonly decision: RateLimitDecision, rule: RateLimitRule) {
+    super(
+      "rate_limited",
+      `Too many requests: at most ${rule.limit} every ${rule.windowSeconds} s from one address. Try again in ${decision.retryAfterSeconds} s.`,
+      undefined,
+      decision.retryAfterSeconds,
+    );
+  }
+}
+
+export interface ClientLimit extends RateLimitRule {
+  /** Names the counter ("compute"); the key is `${name}:ip:${ip}`. */
+  name: string;
+}
+
+/**
+ * Counts this request against the client's limit and throws RateLimitedError (code "rate_limited",
+ * with retryAfterSeconds) when it is over (errorResponse then sets Retry-After). A limit of 0 turns the
+ * check off. When the database is unreachable the request goes through: a public calculation is
+ * worth more than the limit. Returns the decision (null when not counted) for the response headers.
+ */
+export async function enforceClientLimit(req: Request, rule: ClientLimit): Promise<RateLimitDecision | null> {
+  if (!(rule.limit > 0)) return null;
+  let decision: RateLimitDecision;
+  try {
+    decision = await hitRateLimit(`${rule.name}:ip:${clientIp(req)}`, rule);
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return null;
+    throw err;
+  }
+  if (!decision.allowed) throw new RateLimitedError(decision, rule);
+  return decision;
+}
