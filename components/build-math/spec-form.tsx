@@ -79,7 +79,7 @@ export function SpecFormFields({ form }: { form: SpecForm }) {
             {stringsError}
           </p>
         ) : null}
-        <div className="overflow-x-auto rounded-panel border border-spruce-200 bg-white">
+        <div className="relative overflow-x-auto rounded-panel border border-spruce-200 bg-white">
           <table className="w-full min-w-[44rem] table-fixed border-collapse text-sm">
             <caption className="sr-only">Strings</caption>
             <colgroup>

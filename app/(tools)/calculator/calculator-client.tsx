@@ -82,7 +82,7 @@ export function CalculatorClient({ initialSpec, linkProblem }: { initialSpec: In
         <UnitSwitch value={units} onChange={switchUnits} />
       </div>
 
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,38rem)_minmax(0,1fr)]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,38rem)_minmax(0,1fr)]">
         <Card>
           <CardHeader title="Spec" subtitle="Lengths in the chosen unit; gauges in inches" />
           <CardBody>
