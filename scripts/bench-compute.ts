@@ -7,12 +7,16 @@
 // It starts MariaDB (db/mariadb.sh) when it is not running, builds into .next-bench (skip with
 // BENCH_SKIP_BUILD=1 once built), serves on BENCH_PORT (default APP_PORT + 200) and stops what it started.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { cpus, loadavg } from "node:os";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import autocannon from "autocannon";
 import { ROOT, loadEnv } from "./env.mjs";
 
 const env = loadEnv();
 const say = (s: string) => console.log(`[bench] ${s}`);
+// Other work on the machine moves these figures: print the load beside them.
+const load1 = () => `load ${loadavg()[0]!.toFixed(2)} on ${cpus().length} cores`;
 
 async function inProcess() {
   const { computeSpec } = await import("../lib/lutherie/compute-spec");
@@ -71,6 +75,16 @@ async function stopServer(child: ChildProcess) {
   if (child.exitCode === null) child.kill("SIGKILL");
 }
 
+/** CPU time (user + system, ms) a process has used so far, from /proc (Linux). */
+function cpuMs(pid: number | undefined): number {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // clock ticks at USER_HZ = 100
+  } catch {
+    return Number.NaN;
+  }
+}
+
 function percentile(sorted: number[], p: number) {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
 }
@@ -92,20 +106,24 @@ async function limiterCost() {
   const { hitRateLimit, clearRateLimit } = await import("../lib/data/rate-limit");
   const { db } = await import("../db/knex");
   const out: Record<string, number> = {};
-  for (const algorithm of ["fixed", "sliding"] as const) {
-    const key = `bench:${algorithm}:${Date.now()}`;
-    for (let i = 0; i < 50; i++) await hitRateLimit(key, { limit: 1e9, windowSeconds: 60, algorithm });
-    const n = 1000;
-    const t0 = performance.now();
-    for (let i = 0; i < n; i++) await hitRateLimit(key, { limit: 1e9, windowSeconds: 60, algorithm });
-    out[algorithm] = (performance.now() - t0) / n;
-    await clearRateLimit(key);
+  for (const [label, exact] of [["batched", false], ["exact", true]] as const) {
+    for (const algorithm of ["fixed", "sliding"] as const) {
+      const key = `bench:${label}:${algorithm}:${Date.now()}`;
+      const rule = { limit: 1e9, windowSeconds: 60, algorithm, exact };
+      for (let i = 0; i < 50; i++) await hitRateLimit(key, rule);
+      const n = exact ? 500 : 20_000;
+      const t0 = performance.now();
+      for (let i = 0; i < n; i++) await hitRateLimit(key, rule);
+      out[`${label} ${algorithm}`] = (performance.now() - t0) / n;
+      await clearRateLimit(key);
+    }
   }
   await db.destroy();
   return out;
 }
 
 async function main() {
+  say(`start: ${load1()}`);
   const inproc = await inProcess();
   say(`in-process, fanned 8-string / 27 frets / 3 pickups: ${Math.round(inproc.compute).toLocaleString("en")} computeSpec/s, ${Math.round(inproc.parseCompute).toLocaleString("en")} parse+compute/s (result ${inproc.bytes} bytes of JSON)`);
 
@@ -115,7 +133,8 @@ async function main() {
   try {
     run(process.execPath, ["--import", "tsx", "db/cli.ts", "migrate"], { KNEX_ENV: "development" });
     const cost = await limiterCost();
-    say(`rate limiter, one hit against MariaDB, sequential: fixed ${cost.fixed!.toFixed(3)} ms, sliding ${cost.sliding!.toFixed(3)} ms`);
+    const costText = Object.entries(cost).map(([k, v]) => `${k} ${v.toFixed(3)} ms`).join(", ");
+    say(`rate limiter, mean time per hit, sequential, against MariaDB: ${costText}`);
 
     if (process.env.BENCH_SKIP_BUILD !== "1") {
       say("building the app into .next-bench (BENCH_SKIP_BUILD=1 skips this next time)");
@@ -123,13 +142,24 @@ async function main() {
     }
     const url = `http://127.0.0.1:${port}/api/compute`;
     const rows: string[] = [];
-    for (const [label, limit] of [["limiter on (every request counted)", "1000000000"], ["limiter off", "0"]] as const) {
+    const runs = [
+      ["limiter on (every request counted)", "1000000000", inproc.body],
+      ["limiter off", "0", inproc.body],
+      ["framework baseline: body {} → 422, limiter off", "0", "{}"],
+    ] as const;
+    for (const [label, limit, body] of runs) {
       const server = startServer(port, limit);
       try {
         await waitFor(`http://127.0.0.1:${port}/api/health`);
-        await load(url, inproc.body, 3); // warm-up
-        const r = await load(url, inproc.body, 10);
-        const line = `POST /api/compute, 10 connections, 10 s, ${label}: p50 ${r.p50.toFixed(2)} ms, p95 ${r.p95.toFixed(2)} ms, p99 ${r.p99.toFixed(2)} ms, ${Math.round(r.rps)} req/s, statuses ${JSON.stringify(r.statuses)}`;
+        await load(url, body, 3); // warm-up
+        const before = load1();
+        const cpu0 = cpuMs(server.pid);
+        const r = await load(url, body, 10);
+        const requests = Object.values(r.statuses).reduce((a, b) => a + b, 0);
+        const cpuPerRequest = (cpuMs(server.pid) - cpu0) / requests;
+        const line =
+          `POST /api/compute, 10 connections, 10 s, ${label}: p50 ${r.p50.toFixed(2)} ms, p95 ${r.p95.toFixed(2)} ms, p99 ${r.p99.toFixed(2)} ms, ` +
+          `${Math.round(r.rps)} req/s, server CPU ${cpuPerRequest.toFixed(2)} ms/request, statuses ${JSON.stringify(r.statuses)} (${before} before, ${load1()} after)`;
         say(line);
         rows.push(line);
       } finally {
@@ -138,7 +168,7 @@ async function main() {
     }
     say("summary:");
     console.log(`  computeSpec in process: ${Math.round(inproc.compute)}/s (target ≥ 20000/s); with zod parse: ${Math.round(inproc.parseCompute)}/s`);
-    console.log(`  limiter per hit: fixed ${cost.fixed!.toFixed(3)} ms, sliding ${cost.sliding!.toFixed(3)} ms`);
+    console.log(`  limiter per hit: ${costText}`);
     for (const r of rows) console.log(`  ${r}`);
   } finally {
     if (!dbWasUp) run("bash", ["db/mariadb.sh", "stop"]);

@@ -2,8 +2,19 @@ import { createHash } from "node:crypto";
 import { db } from "@/db/knex";
 
 // Rate-limit counters in MariaDB, keyed by any string ("compute:ip:203.0.113.7"), so every app
-// process shares them. One round trip per hit for a fixed window (the upsert returns the new count
-// through LAST_INSERT_ID(expr)); a sliding window adds a read of the previous window, in parallel.
+// process shares them.
+//
+// Why hits are batched: each counter write is an InnoDB commit, and commits wait for the redo log
+// to reach the disk (innodb_flush_log_at_trx_commit=1), about 2 ms here — more than the whole
+// computation it guards. So each process keeps its own tally per key and window and writes it
+// with one upsert (`hits = LAST_INSERT_ID(hits + n)`, which also returns the shared total):
+//   - on the first hit of a key in a window (to learn what other processes counted),
+//   - at least once a second while hits keep coming (and a second after the last one),
+//   - on every hit once the key is within 10 % of its limit, so decisions near the limit see
+//     every process's count.
+// Within one process the count is exact. Across processes, far from the limit, a process may not
+// yet know up to a second of the others' hits; near the limit every hit is synchronised. Pass
+// `exact: true` to write every hit (one commit per hit).
 
 export type RateLimitAlgorithm = "fixed" | "sliding";
 
@@ -13,6 +24,8 @@ export interface RateLimitRule {
   windowSeconds: number;
   /** "sliding" (default) weighs the previous window by how much of it still overlaps; "fixed" resets at each boundary. */
   algorithm?: RateLimitAlgorithm;
+  /** Write every hit to the database instead of batching (see above). */
+  exact?: boolean;
 }
 
 export interface RateLimitDecision {
@@ -29,19 +42,45 @@ export interface RateLimitDecision {
 
 const TABLE = "rate_limit_counters";
 const MAX_KEY = 191;
-/** Share of hits that also delete expired rows, so the table stays small without a worker. */
-const PRUNE_PROBABILITY = 0.01;
+/** Share of windows that also delete expired rows, so the table stays small without a worker. */
+const PRUNE_PROBABILITY = 0.02;
+const SYNC_EVERY_MS = 1000;
+const NEAR_LIMIT_SHARE = 0.1;
+const MAX_BUCKETS = 20_000;
+
+/** This process's view of one key in one window. */
+interface Bucket {
+  key: string;
+  windowStart: number;
+  expiresAt: number;
+  /** Hits this process has counted in the window. */
+  seq: number;
+  /** Of those, how many are already in the database. */
+  flushed: number;
+  /** Hits other processes had written, as of the last sync. */
+  others: number;
+  known: boolean;
+  lastSync: number;
+  inflight: Promise<void> | null;
+  timer: ReturnType<typeof setTimeout> | null;
+  /** The previous window's total (sliding windows only). */
+  previous: number;
+  /** Settles once the previous window has been read. */
+  ready: Promise<void>;
+}
+
+const buckets = new Map<string, Bucket>();
 
 function storedKey(key: string): string {
   return key.length <= MAX_KEY ? key : `sha256:${createHash("sha256").update(key).digest("hex")}`;
 }
 
-/** Adds one hit to (key, window) and returns the window's count after it. */
-async function increment(key: string, windowStartMs: number, expiresAtMs: number): Promise<number> {
+/** Adds n hits to (key, window) and returns the window's total after it (n may be 0: just read). */
+async function increment(key: string, windowStartMs: number, expiresAtMs: number, n: number): Promise<number> {
   const [res] = (await db.raw(
-    `INSERT INTO ${TABLE} (bucket_key, window_start_ms, hits, expires_at_ms) VALUES (?, ?, LAST_INSERT_ID(1), ?)
-     ON DUPLICATE KEY UPDATE hits = LAST_INSERT_ID(hits + 1)`,
-    [key, windowStartMs, expiresAtMs],
+    `INSERT INTO ${TABLE} (bucket_key, window_start_ms, hits, expires_at_ms) VALUES (?, ?, LAST_INSERT_ID(?), ?)
+     ON DUPLICATE KEY UPDATE hits = LAST_INSERT_ID(hits + ?)`,
+    [key, windowStartMs, n, expiresAtMs, n],
   )) as [{ insertId: number }];
   return Number(res.insertId);
 }
@@ -49,6 +88,97 @@ async function increment(key: string, windowStartMs: number, expiresAtMs: number
 async function countIn(key: string, windowStartMs: number): Promise<number> {
   const row = (await db(TABLE).where({ bucket_key: key, window_start_ms: windowStartMs }).first("hits")) as { hits: number } | undefined;
   return row ? Number(row.hits) : 0;
+}
+
+/**
+ * Writes this process's unwritten hits of a bucket; with `refresh`, also when there are none, to
+ * learn what the other processes counted.
+ */
+async function sync(b: Bucket, nowMs: number, refresh: boolean): Promise<void> {
+  while (b.inflight) await b.inflight.catch(() => undefined);
+  if (b.seq === b.flushed && !(refresh || !b.known)) return;
+  const sending = b.seq;
+  const delta = sending - b.flushed;
+  b.flushed = sending;
+  b.inflight = increment(b.key, b.windowStart, b.expiresAt, delta)
+    .then((total) => {
+      b.others = total - sending;
+      b.known = true;
+      if (refresh) b.lastSync = nowMs;
+    })
+    .catch((err: unknown) => {
+      b.flushed -= delta; // not written: try again next time
+      throw err;
+    })
+    .finally(() => {
+      b.inflight = null;
+    });
+  await b.inflight;
+}
+
+/** Writes what is left a second after the last hit, so other processes see it. */
+function scheduleFlush(b: Bucket): void {
+  if (b.timer || b.seq === b.flushed) return;
+  b.timer = setTimeout(() => {
+    b.timer = null;
+    void sync(b, b.lastSync, false).catch(() => undefined);
+  }, SYNC_EVERY_MS);
+  b.timer.unref?.();
+}
+
+async function bucketFor(key: string, rule: RateLimitRule, nowMs: number): Promise<Bucket> {
+  const windowMs = rule.windowSeconds * 1000;
+  const windowStart = Math.floor(nowMs / windowMs) * windowMs;
+  const sliding = (rule.algorithm ?? "sliding") === "sliding";
+  const id = `${key}\u0000${rule.windowSeconds}`;
+  const old = buckets.get(id);
+  if (old && old.windowStart === windowStart) {
+    await old.ready;
+    return old;
+  }
+  if (old?.timer) clearTimeout(old.timer);
+  if (buckets.size >= MAX_BUCKETS) evictOldBuckets(nowMs);
+  const b: Bucket = {
+    key,
+    windowStart,
+    // A sliding window still reads this row during the next window.
+    expiresAt: windowStart + (sliding ? 2 : 1) * windowMs,
+    seq: 0,
+    flushed: 0,
+    others: 0,
+    known: false,
+    lastSync: 0,
+    inflight: null,
+    timer: null,
+    previous: 0,
+    ready: Promise.resolve(),
+  };
+  // Registered at once, so concurrent hits share it and wait for the same preparation.
+  buckets.set(id, b);
+  b.ready = (async () => {
+    // A new window: write what the old one still holds, so the previous-window read includes it.
+    if (old) await sync(old, nowMs, false).catch(() => undefined);
+    if (sliding) b.previous = await countIn(key, windowStart - windowMs);
+  })();
+  try {
+    await b.ready;
+  } catch (err) {
+    if (buckets.get(id) === b) buckets.delete(id); // retried by the next hit
+    throw err;
+  }
+  if (Math.random() < PRUNE_PROBABILITY) void pruneRateLimitCounters(nowMs).catch(() => undefined);
+  return b;
+}
+
+function evictOldBuckets(nowMs: number): void {
+  for (const [id, b] of buckets) {
+    if (b.expiresAt <= nowMs && b.seq === b.flushed) buckets.delete(id);
+  }
+  // Still full (a flood of new keys): forget written buckets, oldest first.
+  for (const [id, b] of buckets) {
+    if (buckets.size < MAX_BUCKETS) break;
+    if (b.seq === b.flushed && !b.inflight) buckets.delete(id);
+  }
 }
 
 /**
@@ -87,26 +217,36 @@ export function decide(rule: RateLimitRule, current: number, previous: number, e
 
 /** Counts one hit on `key` and says whether it is within the rule. Every hit counts, refused ones too. */
 export async function hitRateLimit(key: string, rule: RateLimitRule, nowMs = Date.now()): Promise<RateLimitDecision> {
-  const k = storedKey(key);
+  const b = await bucketFor(storedKey(key), rule, nowMs);
+  const ordinal = ++b.seq;
   const windowMs = rule.windowSeconds * 1000;
-  const windowStart = Math.floor(nowMs / windowMs) * windowMs;
-  const sliding = (rule.algorithm ?? "sliding") === "sliding";
-  // A sliding window still reads this row during the next window.
-  const expiresAt = windowStart + (sliding ? 2 : 1) * windowMs;
-  const [current, previous] = await Promise.all([
-    increment(k, windowStart, expiresAt),
-    sliding ? countIn(k, windowStart - windowMs) : Promise.resolve(0),
-  ]);
-  if (Math.random() < PRUNE_PROBABILITY) void pruneRateLimitCounters(nowMs).catch(() => undefined);
-  return decide(rule, current, previous, nowMs - windowStart);
+  const elapsed = nowMs - b.windowStart;
+  const overlap = (rule.algorithm ?? "sliding") === "sliding" ? 1 - elapsed / windowMs : 0;
+  const estimate = () => b.previous * overlap + b.others + ordinal;
+  const nearLimit = estimate() >= rule.limit * (1 - NEAR_LIMIT_SHARE) - 1;
+  if (rule.exact || !b.known || nearLimit || nowMs - b.lastSync >= SYNC_EVERY_MS) await sync(b, nowMs, true);
+  scheduleFlush(b);
+  return decide(rule, b.others + ordinal, b.previous, elapsed);
+}
+
+/** Writes every batched hit of this process now (tests, and before a process exits). */
+export async function flushRateLimits(): Promise<void> {
+  await Promise.all([...buckets.values()].map((b) => sync(b, b.lastSync, false).catch(() => undefined)));
 }
 
 /** Deletes expired counters (at most `batch` rows); returns how many went. */
 export async function pruneRateLimitCounters(nowMs = Date.now(), batch = 1000): Promise<number> {
-  return Number(await db.raw(`DELETE FROM ${TABLE} WHERE expires_at_ms < ? LIMIT ?`, [nowMs, batch]).then(([r]) => (r as { affectedRows: number }).affectedRows));
+  const [res] = (await db.raw(`DELETE FROM ${TABLE} WHERE expires_at_ms < ? LIMIT ?`, [nowMs, batch])) as [{ affectedRows: number }];
+  return Number(res.affectedRows);
 }
 
-/** Forgets every counter of a key (after an account is verified, or in tests). */
+/** Forgets every counter of a key, here and in the database (after a verified action, or in tests). */
 export async function clearRateLimit(key: string): Promise<void> {
-  await db(TABLE).where({ bucket_key: storedKey(key) }).del();
+  const k = storedKey(key);
+  for (const [id, b] of buckets) {
+    if (b.key !== k) continue;
+    if (b.timer) clearTimeout(b.timer);
+    buckets.delete(id);
+  }
+  await db(TABLE).where({ bucket_key: k }).del();
 }

@@ -45,11 +45,14 @@ export interface ClientLimit extends RateLimitRule {
   name: string;
 }
 
+let lastFailureLog = 0;
+
 /**
  * Counts this request against the client's limit and throws RateLimitedError (code "rate_limited",
  * with retryAfterSeconds) when it is over (errorResponse then sets Retry-After). A limit of 0 turns the
- * check off. When the database is unreachable the request goes through: a public calculation is
- * worth more than the limit. Returns the decision (null when not counted) for the response headers.
+ * check off. When the counters cannot be read or written (database away, table trouble) the
+ * request goes through and the failure is logged once a minute: a public calculation is worth more
+ * than the limit, and it must never turn into a 500. Returns the decision (null when not counted).
  */
 export async function enforceClientLimit(req: Request, rule: ClientLimit): Promise<RateLimitDecision | null> {
   if (!(rule.limit > 0)) return null;
@@ -57,8 +60,12 @@ export async function enforceClientLimit(req: Request, rule: ClientLimit): Promi
   try {
     decision = await hitRateLimit(`${rule.name}:ip:${clientIp(req)}`, rule);
   } catch (err) {
-    if (isDatabaseUnavailable(err)) return null;
-    throw err;
+    const now = Date.now();
+    if (now - lastFailureLog > 60_000) {
+      lastFailureLog = now;
+      console.error(`[rate-limit] ${rule.name}: counters unavailable, letting requests through`, isDatabaseUnavailable(err) ? "(database unreachable)" : err);
+    }
+    return null;
   }
   if (!decision.allowed) throw new RateLimitedError(decision, rule);
   return decision;

@@ -1,7 +1,7 @@
 // Rate-limit counters on the real test MariaDB (lib/data/rate-limit.ts), with time passed in.
 import { afterAll, describe, expect, it } from "vitest";
 import { db } from "@/db/knex";
-import { clearRateLimit, decide, hitRateLimit, pruneRateLimitCounters } from "@/lib/data/rate-limit";
+import { clearRateLimit, decide, flushRateLimits, hitRateLimit, pruneRateLimitCounters } from "@/lib/data/rate-limit";
 
 const key = (name: string) => `test:${name}:${Date.now()}:${Math.random()}`;
 const T0 = Date.UTC(2027, 0, 4, 12, 0, 0); // a window boundary for 60 s windows
@@ -40,6 +40,45 @@ describe("fixed window", () => {
     const rule = { limit: 100, windowSeconds: 60, algorithm: "fixed" as const };
     const all = await Promise.all(Array.from({ length: 25 }, () => hitRateLimit(k, rule, T0)));
     expect(all.map((d) => d.count).sort((x, y) => x - y)).toEqual(Array.from({ length: 25 }, (_, i) => i + 1));
+    await clearRateLimit(k);
+  });
+});
+
+async function stored(k: string, windowStart: number): Promise<number> {
+  const row = await db("rate_limit_counters").where({ bucket_key: k, window_start_ms: windowStart }).first("hits");
+  return row ? Number(row.hits) : 0;
+}
+
+describe("batching (one commit per key per second while far from the limit)", () => {
+  it("writes the first hit at once and the rest within a second, or on flush", async () => {
+    const k = key("batch");
+    const rule = { limit: 1000, windowSeconds: 60, algorithm: "fixed" as const };
+    for (let i = 0; i < 5; i++) expect((await hitRateLimit(k, rule, T0 + i)).count).toBe(i + 1);
+    expect(await stored(k, T0)).toBe(1);
+    await flushRateLimits();
+    expect(await stored(k, T0)).toBe(5);
+    await clearRateLimit(k);
+  });
+
+  it("sees other processes' hits at the next sync, and syncs every hit near the limit", async () => {
+    const k = key("shared");
+    const rule = { limit: 10, windowSeconds: 60, algorithm: "fixed" as const };
+    expect((await hitRateLimit(k, rule, T0)).count).toBe(1);
+    // Another app process writes 8 hits to the same counter.
+    await db("rate_limit_counters").where({ bucket_key: k, window_start_ms: T0 }).increment("hits", 8);
+    const later = await hitRateLimit(k, rule, T0 + 1500); // a second on: this hit re-reads the total
+    expect(later).toMatchObject({ count: 10, allowed: true });
+    const over = await hitRateLimit(k, rule, T0 + 1501); // near the limit: written and re-read at once
+    expect(over).toMatchObject({ count: 11, allowed: false });
+    expect(await stored(k, T0)).toBe(11);
+    await clearRateLimit(k);
+  });
+
+  it("writes every hit with exact: true", async () => {
+    const k = key("exact");
+    const rule = { limit: 1000, windowSeconds: 60, algorithm: "fixed" as const, exact: true };
+    for (let i = 0; i < 3; i++) await hitRateLimit(k, rule, T0 + i);
+    expect(await stored(k, T0)).toBe(3);
     await clearRateLimit(k);
   });
 });
