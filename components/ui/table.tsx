@@ -4,7 +4,7 @@ import { cx } from "@/lib/ui/cx";
 /** Scrolls sideways on a phone instead of squeezing columns. */
 export function Table({ className, caption, children, ...rest }: HTMLAttributes<HTMLTableElement> & { caption?: string }) {
   return (
-    <div className="overflow-x-auto rounded-panel border border-spruce-200 bg-white">
+    <div className="relative overflow-x-auto rounded-panel border border-spruce-200 bg-white">
       <table className={cx("w-full border-collapse text-sm", className)} {...rest}>
         {caption ? <caption className="sr-only">{caption}</caption> : null}
         {children}

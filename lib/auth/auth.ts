@@ -4,7 +4,7 @@ import Credentials from "next-auth/providers/credentials";
 import { findUserByEmail, findUserForPasswordCheck } from "@/lib/data/users";
 import { passwordSignInSchema } from "@/lib/schemas/auth";
 import { knexAdapter } from "./adapter";
-import { clientIp } from "./client-ip";
+import { clientIp } from "@/lib/http/client-ip";
 import { authBaseConfig } from "./config";
 import { InvalidCredentials, SignInRateLimited } from "./errors";
 import { EMAIL_PROVIDER_ID, queueSignInLinkEmail, SIGN_IN_LINK_MAX_AGE_S } from "./magic-link";

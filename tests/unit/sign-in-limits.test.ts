@@ -1,6 +1,6 @@
 // The sliding-window arithmetic of the sign-in limit (pure), and who the client is.
 import { describe, expect, it } from "vitest";
-import { clientIp } from "@/lib/auth/client-ip";
+import { clientIp } from "@/lib/http/client-ip";
 import { parseSignInCode } from "@/lib/auth/errors";
 import { describeRetry, retryAfterSeconds, signInLimitsFromEnv } from "@/lib/auth/rate-limit";
 
