@@ -15,6 +15,11 @@ import { ROOT, readEnv } from "./env.mjs";
 import { servicesFor, testOverrides } from "./services.mjs";
 
 const mode = process.argv[2] ?? "start";
+// `npm test -- tests/http/x.test.ts` runs only those Vitest files (and no browser tests unless
+// `--e2e` is among the words): the same bootstrap, a faster loop while working on one thing.
+const extra = process.argv.slice(3);
+const wantE2e = extra.length === 0 || extra.includes("--e2e");
+const vitestArgs = extra.filter((a) => a !== "--e2e");
 if (!["start", "dev", "test"].includes(mode)) {
   console.error(`usage: launcher.mjs start|dev|test (got ${mode})`);
   process.exit(2);
@@ -177,14 +182,14 @@ async function main() {
 
   const testEnv = { ...appEnv, NODE_ENV: "test", TEST_APP_URL: env.APP_URL };
   let status = 0;
-  const vitest = spawnSync(process.execPath, [join(ROOT, "node_modules", "vitest", "vitest.mjs"), "run"], {
+  const vitest = spawnSync(process.execPath, [join(ROOT, "node_modules", "vitest", "vitest.mjs"), "run", ...vitestArgs], {
     cwd: ROOT,
     env: testEnv,
     stdio: "inherit",
   });
   status = vitest.status ?? 1;
 
-  if (existsSync(join(ROOT, "tests", "e2e")) && process.env.SKIP_E2E !== "1") {
+  if (existsSync(join(ROOT, "tests", "e2e")) && process.env.SKIP_E2E !== "1" && wantE2e) {
     run("bash", ["scripts/ensure-chromium.sh"], env, "Chromium install");
     const pw = spawnSync(
       process.execPath,

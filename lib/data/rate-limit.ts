@@ -78,9 +78,9 @@ function storedKey(key: string): string {
 /** Adds n hits to (key, window) and returns the window's total after it (n may be 0: just read). */
 async function increment(key: string, windowStartMs: number, expiresAtMs: number, n: number): Promise<number> {
   const [res] = (await db.raw(
-    `INSERT INTO ${TABLE} (bucket_key, window_start_ms, hits, expires_at_ms) VALUES (?, ?, LAST_INSERT_ID(?), ?)
+    `INSERT INTO ?? (bucket_key, window_start_ms, hits, expires_at_ms) VALUES (?, ?, LAST_INSERT_ID(?), ?)
      ON DUPLICATE KEY UPDATE hits = LAST_INSERT_ID(hits + ?)`,
-    [key, windowStartMs, n, expiresAtMs, n],
+    [TABLE, key, windowStartMs, n, expiresAtMs, n],
   )) as [{ insertId: number }];
   return Number(res.insertId);
 }
@@ -236,7 +236,7 @@ export async function flushRateLimits(): Promise<void> {
 
 /** Deletes expired counters (at most `batch` rows); returns how many went. */
 export async function pruneRateLimitCounters(nowMs = Date.now(), batch = 1000): Promise<number> {
-  const [res] = (await db.raw(`DELETE FROM ${TABLE} WHERE expires_at_ms < ? LIMIT ?`, [nowMs, batch])) as [{ affectedRows: number }];
+  const [res] = (await db.raw("DELETE FROM ?? WHERE expires_at_ms < ? LIMIT ?", [TABLE, nowMs, batch])) as [{ affectedRows: number }];
   return Number(res.affectedRows);
 }
 
