@@ -23,6 +23,7 @@ export const PERMISSIONS = [
   "commission.create",
   "commission.write",
   "commission.advance", // move a commission to its next stage
+  "commission.signoff", // the owner's sign-off on a builder's stage change
   "spec.read",
   "spec.draft",
   "spec.approve", // the client's consent to a locked spec version
@@ -48,7 +49,7 @@ export const PERMISSIONS = [
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const CLIENT: Permission[] = ["workshop.read", "commission.read", "spec.read", "spec.approve", "payment.read", "photo.read", "setup.read"];
+const CLIENT: Permission[] = ["workshop.read", "commission.read", "commission.create", "spec.read", "spec.approve", "payment.read", "photo.read", "setup.read"];
 
 const BUILDER: Permission[] = [
   "workshop.read",

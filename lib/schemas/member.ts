@@ -6,7 +6,7 @@ import { emailSchema, newPasswordSchema, personNameSchema } from "./auth";
 
 export const roleSchema = z.enum(ROLES, { error: "Choose owner, builder, bookkeeper or client." });
 
-export const idParamSchema = z.coerce.number().int().positive().max(2_147_483_647);
+export { idParamSchema } from "./ids";
 
 export const invitationCreateSchema = z.object({ email: emailSchema, role: roleSchema });
 export type InvitationCreateInput = z.input<typeof invitationCreateSchema>;
