@@ -6,6 +6,7 @@ import { NextResponse, type NextRequest } from "next/server";
 import { getToken } from "next-auth/jwt";
 import { usesSecureCookies } from "@/lib/auth/config";
 import { isPublicPath } from "@/lib/auth/public-paths";
+import { csrfRefusal } from "@/lib/http/csrf";
 import { securityHeaders } from "@/lib/http/security-headers";
 
 const headers = securityHeaders({
@@ -22,9 +23,29 @@ async function signedIn(req: NextRequest): Promise<boolean> {
   }
 }
 
+const appOrigin = (() => {
+  try {
+    return new URL(process.env.APP_URL ?? "").origin;
+  } catch {
+    return null;
+  }
+})();
+
 export async function proxy(req: NextRequest) {
   const { pathname, search } = req.nextUrl;
   let res: NextResponse;
+  const refusal = csrfRefusal({
+    method: req.method,
+    pathname,
+    origin: req.headers.get("origin"),
+    secFetchSite: req.headers.get("sec-fetch-site"),
+    allowedOrigins: [req.nextUrl.origin, ...(appOrigin ? [appOrigin] : [])],
+  });
+  if (refusal) {
+    res = NextResponse.json({ error: { code: "forbidden", message: refusal } }, { status: 403 });
+    for (const [k, v] of Object.entries(headers)) res.headers.set(k, v);
+    return res;
+  }
   // Only page loads are gated; server actions (POST) and the API answer for themselves.
   const isPageLoad = req.method === "GET" || req.method === "HEAD";
   if (isPageLoad && !isPublicPath(pathname) && !(await signedIn(req))) {

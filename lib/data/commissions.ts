@@ -116,13 +116,17 @@ async function checkBuilder(trx: Trx, scope: WorkshopScope, builderId: number | 
   }
 }
 
-/** Takes the next number of the year for this workshop under a row lock. */
+/**
+ * Takes the next number of the year for this workshop in one statement: the upsert locks the
+ * counter row until the transaction ends, so concurrent openings queue instead of deadlocking.
+ */
 async function nextNumber(trx: Trx, workshopId: number, year: number): Promise<string> {
-  await trx("commission_counters").insert({ workshop_id: workshopId, year, last_sequence: 0 }).onConflict(["workshop_id", "year"]).ignore();
-  const row = await trx("commission_counters").where({ workshop_id: workshopId, year }).forUpdate().first("last_sequence");
-  const next = Number(row.last_sequence) + 1;
-  await trx("commission_counters").where({ workshop_id: workshopId, year }).update({ last_sequence: next });
-  return formatCommissionNumber(year, next);
+  const [res] = (await trx.raw(
+    `INSERT INTO commission_counters (workshop_id, year, last_sequence) VALUES (?, ?, LAST_INSERT_ID(1))
+     ON DUPLICATE KEY UPDATE last_sequence = LAST_INSERT_ID(last_sequence + 1)`,
+    [workshopId, year],
+  )) as [{ insertId: number }];
+  return formatCommissionNumber(year, Number(res.insertId));
 }
 
 /**

@@ -73,6 +73,12 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   return fatal === true;
 }
 
+/** A deadlock victim after its retries, or a lock wait that timed out: busy, not broken. */
+function isLockContention(err: unknown): boolean {
+  const code = err && typeof err === "object" ? (err as { code?: unknown }).code : undefined;
+  return code === "ER_LOCK_DEADLOCK" || code === "ER_LOCK_WAIT_TIMEOUT";
+}
+
 /** Maps any thrown value to a status and a body that is safe to show: no stack, no SQL. */
 export function toErrorBody(err: unknown): { status: number; body: ErrorBody } {
   if (err instanceof AppError) {
@@ -85,6 +91,12 @@ export function toErrorBody(err: unknown): { status: number; body: ErrorBody } {
     return {
       status: 422,
       body: { error: { code: "validation_failed", message: "Some fields are not valid.", issues: zodIssues(err) } },
+    };
+  }
+  if (isLockContention(err)) {
+    return {
+      status: 503,
+      body: { error: { code: "unavailable", message: "Too many changes at once; nothing was changed. Try again in a moment.", retryAfterSeconds: 1 } },
     };
   }
   if (isDatabaseUnavailable(err)) {
