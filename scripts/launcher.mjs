@@ -18,8 +18,11 @@ const mode = process.argv[2] ?? "start";
 // `npm test -- tests/http/x.test.ts` runs only those Vitest files (and no browser tests unless
 // `--e2e` is among the words): the same bootstrap, a faster loop while working on one thing.
 const extra = process.argv.slice(3);
+// `npm test -- --serve` builds and starts the test stack and keeps it up without running anything:
+// then `TEST_APP_URL=http://localhost:3100 npx vitest run tests/http/x.test.ts` as often as needed.
+const serveOnly = extra.includes("--serve");
 const wantE2e = extra.length === 0 || extra.includes("--e2e");
-const vitestArgs = extra.filter((a) => a !== "--e2e");
+const vitestArgs = extra.filter((a) => a !== "--e2e" && a !== "--serve");
 if (!["start", "dev", "test"].includes(mode)) {
   console.error(`usage: launcher.mjs start|dev|test (got ${mode})`);
   process.exit(2);
@@ -173,6 +176,11 @@ async function main() {
   }
   await waitForHttp(`${env.APP_URL}/api/health`, "app", 180_000);
 
+  if (mode === "test" && serveOnly) {
+    say(`test stack ready in ${seconds()}: ${env.APP_URL} on the test database; Ctrl-C stops it`);
+    say(`run files against it: TEST_APP_URL=${env.APP_URL} npx vitest run <files>`);
+    return;
+  }
   if (mode !== "test") {
     say(`ready in ${seconds()}: open ${env.APP_URL}`);
     say(`sign in as any demo person (README lists them) with the password ${env.DEMO_PASSWORD}`);
