@@ -24,7 +24,7 @@ export function PaymentHistory({ payments, showProcessor }: { payments: PaymentO
         {[...payments].reverse().map((p) => {
           const status = paymentStatus(p);
           const proc = p.processor;
-          const ref = p.reference ?? proc?.refundId ?? proc?.chargeId ?? (showProcessor ? proc?.sessionId : null) ?? "—";
+          const ref = p.reference ?? (showProcessor ? proc?.sessionId : null) ?? "—";
           return (
             <tr key={p.id}>
               <Td className="font-mono text-xs">{p.id}</Td>

@@ -37,6 +37,8 @@ export async function up(knex: Knex): Promise<void> {
 
 export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTableIfExists("processor_events");
+  // The foreign key on commission_id leans on the unique index below: give it its own index back first.
+  await knex.schema.alterTable("payments", (t) => t.index(["commission_id"], "payments_commission_id_foreign"));
   await knex.schema.alterTable("payments", (t) => {
     t.dropUnique(["commission_id", "kind", "checkout_attempt"]);
     t.dropIndex(["processor_payment_id"]);

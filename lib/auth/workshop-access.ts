@@ -4,7 +4,7 @@
 // functions need. The workshop id comes from the membership row, never from the request.
 import { cache } from "react";
 import { findMembershipBySlug, type WorkshopRecord } from "@/lib/data/memberships";
-import { findProcessorEventActor } from "@/lib/data/processor-events";
+import { findProcessorEventActor } from "@/lib/data/processor-actor";
 import { forbidden, notFound } from "@/lib/http/errors";
 import { can, type Permission, type PermissionRequirement, type Role } from "./permissions";
 import { mintWorkshopScope, type WorkshopScope } from "./scope";

@@ -70,7 +70,8 @@ export function toPaymentOut(scope: WorkshopScope, r: PaymentRow, all: readonly 
     method: r.method,
     amountMinor: Number(r.amount_minor),
     currency: r.currency,
-    reference: r.reference,
+    // A card payment's reference is the processor's charge (or refund), as on the client's receipt.
+    reference: r.reference ?? (r.method === "card" ? (r.processor_refund_id ?? r.processor_charge_id) : null),
     refundOf: r.refund_of_payment_id,
     failureMessage: r.failure_message,
     paidAt: r.paid_at ? iso(r.paid_at) : null,

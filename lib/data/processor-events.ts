@@ -5,7 +5,6 @@
 // of order or several times all end in the same state. The event id is stored in the same
 // transaction: a second delivery finds it and changes nothing.
 import { db } from "@/db/knex";
-import type { Role } from "@/lib/auth/permissions";
 import type { WorkshopScope } from "@/lib/auth/scope";
 import { appLink } from "@/lib/auth/links";
 import { formatMoney, money } from "@/lib/money/money";
@@ -85,20 +84,6 @@ export async function recordIgnoredEvent(e: ProcessorEventInfo): Promise<EventOu
     if (isDuplicateKey(err)) return "duplicate";
     throw err;
   }
-}
-
-/**
- * Who a verified event acts as in a workshop: the commission's client (the payer) while a member,
- * else an owner. Null when the workshop has no such commission. Only lib/auth/workshop-access.ts
- * turns this into a scope.
- */
-export async function findProcessorEventActor(workshopId: number, commissionId: number): Promise<{ membershipId: number; userId: number; role: Role } | null> {
-  const c = await db("commissions").where({ id: commissionId, workshop_id: workshopId }).first("client_user_id");
-  if (!c) return null;
-  const m =
-    (await db("memberships").where({ workshop_id: workshopId, user_id: c.client_user_id }).first("id", "user_id", "role")) ??
-    (await db("memberships").where({ workshop_id: workshopId, role: "owner" }).orderBy("id").first("id", "user_id", "role"));
-  return m ? { membershipId: m.id, userId: m.user_id, role: m.role } : null;
 }
 
 class DuplicateEvent extends Error {}
