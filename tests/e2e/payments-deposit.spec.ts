@@ -2,7 +2,7 @@
 // fake's hosted checkout page, back once with "cancel", then with a test card; the processor's
 // webhook confirms it, the commission moves to its first build stage and the receipt arrives in
 // the fake inbox.
-import { expect, test } from "@playwright/test";
+import { expect, test, type Browser } from "@playwright/test";
 import { DEFAULT_BUILD_STAGES } from "../../lib/workflow/stages";
 import { closeTestDb } from "../setup/test-db";
 import { detail } from "../http/commission-helpers";
@@ -27,14 +27,22 @@ test.beforeAll(async () => {
 });
 test.afterAll(async () => closeTestDb());
 
+const paymentsPathOf = () => `/${ws.slug}/commissions/${commissionId}/payments`;
+
+/** A fresh browser context signed in as `person`, on the commission's payments page. */
+async function openPayments(browser: Browser, person: { email: string; password: string }) {
+  const ctx = await browser.newContext();
+  const page = await ctx.newPage();
+  await signInInBrowser(page, person, paymentsPathOf());
+  await expect(page).toHaveURL(new RegExp(`${paymentsPathOf()}$`));
+  return { ctx, page };
+}
+
 test("a client pays the deposit on the hosted checkout page and the build starts", async ({ browser }) => {
   test.setTimeout(120_000);
   const firstStage = DEFAULT_BUILD_STAGES[0]!;
-  const paymentsPath = `/${ws.slug}/commissions/${commissionId}/payments`;
-  const ctx = await browser.newContext();
-  const page = await ctx.newPage();
-  await signInInBrowser(page, ws.client, paymentsPath);
-  await expect(page).toHaveURL(new RegExp(`${paymentsPath}$`));
+  const paymentsPath = paymentsPathOf();
+  const { ctx, page } = await openPayments(browser, ws.client);
   const invoices = page.getByRole("table", { name: "Invoices" });
   await expect(invoices.getByRole("row", { name: /Deposit/ })).toContainText("Due");
   await keepScreenshot(page, "payments-client-due");
@@ -82,11 +90,7 @@ test("a client pays the deposit on the hosted checkout page and the build starts
 
 test("the owner records a bank transfer and refunds part of the card deposit", async ({ browser }) => {
   test.setTimeout(120_000);
-  const paymentsPath = `/${ws.slug}/commissions/${commissionId}/payments`;
-  const ctx = await browser.newContext();
-  const page = await ctx.newPage();
-  await signInInBrowser(page, ws.owner, paymentsPath);
-  await expect(page).toHaveURL(new RegExp(`${paymentsPath}$`));
+  const { ctx, page } = await openPayments(browser, ws.owner);
   const history = page.getByRole("table", { name: "Payments and refunds" });
   // The workshop sees the processor's fee and net: 1.45 % of 900.00 + 0.25 (the fake's schedule).
   await expect(history.getByRole("row", { name: /Deposit by card/ })).toContainText("€13.30");
