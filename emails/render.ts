@@ -17,6 +17,7 @@ import {
 import { InvitationEmail } from "./invitation";
 import { MagicLinkEmail } from "./magic-link";
 import { PasswordResetEmail } from "./password-reset";
+import { PaymentReceiptEmail } from "./payment-receipt";
 
 const COMPONENTS: { [T in TemplateName]: (props: TemplateProps<T>) => ReactElement } = {
   invitation: InvitationEmail,
@@ -31,6 +32,7 @@ const COMPONENTS: { [T in TemplateName]: (props: TemplateProps<T>) => ReactEleme
   "on-hold": OnHoldEmail,
   resumed: ResumedEmail,
   cancelled: CancelledEmail,
+  "payment-receipt": PaymentReceiptEmail,
 };
 
 export async function renderEmail<T extends TemplateName>(template: T, rawProps: unknown): Promise<{ html: string; text: string }> {

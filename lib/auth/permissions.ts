@@ -28,6 +28,7 @@ export const PERMISSIONS = [
   "spec.draft",
   "spec.approve", // the client's consent to a locked spec version
   "payment.read",
+  "payment.pay", // pay one's own commission's invoices by card (the data layer checks it is theirs)
   "payment.request", // ask the client for a deposit or balance
   "payment.record", // record a payment taken outside the processor
   "payment.refund",
@@ -49,7 +50,7 @@ export const PERMISSIONS = [
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const CLIENT: Permission[] = ["workshop.read", "commission.read", "commission.create", "spec.read", "spec.approve", "payment.read", "photo.read", "setup.read"];
+const CLIENT: Permission[] = ["workshop.read", "commission.read", "commission.create", "spec.read", "spec.approve", "payment.read", "payment.pay", "photo.read", "setup.read"];
 
 const BUILDER: Permission[] = [
   "workshop.read",

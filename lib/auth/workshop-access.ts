@@ -4,6 +4,7 @@
 // functions need. The workshop id comes from the membership row, never from the request.
 import { cache } from "react";
 import { findMembershipBySlug, type WorkshopRecord } from "@/lib/data/memberships";
+import { findProcessorEventActor } from "@/lib/data/processor-actor";
 import { forbidden, notFound } from "@/lib/http/errors";
 import { can, type Permission, type PermissionRequirement, type Role } from "./permissions";
 import { mintWorkshopScope, type WorkshopScope } from "./scope";
@@ -47,4 +48,14 @@ export async function resolveWorkshopAccess(slug: string, required?: PermissionR
   const ctx = await loadWorkshopContext(slug);
   if (required && !ctx.can(required)) throw forbidden();
   return ctx;
+}
+
+/**
+ * The scope a payment processor's event acts under, for the webhook route only and only after it
+ * has verified the event's signature: the commission's client (the payer) while a member of the
+ * workshop, else an owner. Null when the workshop has no such commission.
+ */
+export async function resolveProcessorEventScope(workshopId: number, commissionId: number): Promise<WorkshopScope | null> {
+  const actor = await findProcessorEventActor(workshopId, commissionId);
+  return actor ? mintWorkshopScope({ workshopId, membershipId: actor.membershipId, userId: actor.userId, role: actor.role }) : null;
 }

@@ -30,6 +30,25 @@ export const EMAIL_TEMPLATES = {
   "on-hold": { props: commissionUpdate, subject: (p: CommissionUpdate) => `On hold: ${about(p)}` },
   resumed: { props: commissionUpdate, subject: (p: CommissionUpdate) => `Work resumed: ${about(p)}` },
   cancelled: { props: commissionUpdate, subject: (p: CommissionUpdate) => `Cancelled: ${about(p)}` },
+  "payment-receipt": {
+    props: z.object({
+      workshopName: z.string(),
+      clientName: z.string(),
+      commissionNumber: z.string(),
+      commissionTitle: z.string(),
+      /** "deposit" or "balance". */
+      invoiceLabel: z.string(),
+      /** Already formatted in the payment's currency ("€900.00"). */
+      amount: z.string(),
+      paidAt: isoTime,
+      method: z.string(),
+      /** The processor's reference for the payment. */
+      reference: z.string(),
+      paymentsUrl: url,
+    }),
+    subject: (p: { invoiceLabel: string; amount: string; commissionNumber: string; commissionTitle: string }) =>
+      `Receipt: ${p.invoiceLabel} of ${p.amount} for ${p.commissionNumber} ${p.commissionTitle}`,
+  },
   invitation: {
     props: z.object({
       workshopName: z.string(),

@@ -29,17 +29,16 @@ describe("e-mail templates", () => {
     await expect(renderEmail("invitation", { workshopName: "X" })).rejects.toThrow();
   });
 
+  const commission = { workshopName: "Fernhollow Luthiery School", clientName: "Ines Varga", commissionNumber: "2027-014", commissionTitle: "Seven-string fan-fret" };
+
   it("renders every commission update with the commission link and stage", async () => {
     const props = {
-      workshopName: "Fernhollow Luthiery School",
-      clientName: "Ines Varga",
-      commissionNumber: "2027-014",
-      commissionTitle: "Seven-string fan-fret",
+      ...commission,
       stageLabel: "Neck carving",
       note: "Truss rod fitted.",
       commissionUrl: "http://localhost:3000/fernhollow/commissions/14",
     };
-    const commissionTemplates = TEMPLATE_NAMES.filter((t) => !["invitation", "magic-link", "password-reset"].includes(t));
+    const commissionTemplates = TEMPLATE_NAMES.filter((t) => !["invitation", "magic-link", "password-reset", "payment-receipt"].includes(t));
     expect(commissionTemplates.length).toBeGreaterThan(5);
     for (const t of commissionTemplates) {
       const { html, text } = await renderEmail(t, props);
@@ -48,6 +47,26 @@ describe("e-mail templates", () => {
       expect(text, t).toContain("2027-014");
       expect(subjectFor(t, props as never), t).toContain("2027-014");
     }
+  });
+
+  it("renders a payment receipt with the amount, the reference and the payments link", async () => {
+    const props = {
+      ...commission,
+      invoiceLabel: "deposit",
+      amount: "€900.00",
+      paidAt: expiresAt,
+      method: "Card (visa) ending 4242",
+      reference: "ch_test_123",
+      paymentsUrl: "http://localhost:3000/fernhollow/commissions/14/payments",
+    };
+    const { html, text } = await renderEmail("payment-receipt", props);
+    expect(html).toContain('href="http://localhost:3000/fernhollow/commissions/14/payments"');
+    expect(html).toContain("Fernhollow Luthiery School");
+    expect(text).toContain("€900.00");
+    expect(text).toContain("ch_test_123");
+    expect(text).toContain("ending 4242");
+    expect(subjectFor("payment-receipt", props)).toBe("Receipt: deposit of €900.00 for 2027-014 Seven-string fan-fret");
+    await expect(renderEmail("payment-receipt", { ...props, paymentsUrl: "not a link" })).rejects.toThrow();
   });
 
   it("has a component for every template", async () => {
