@@ -173,7 +173,7 @@ function setupSection(f: PdfFlow, setup: NonNullable<BuildSheetData["setup"]>, u
       { label: "String", width: 0.08 },
       { label: `Action 12th (${unit})`, width: 0.13, align: "right" },
       { label: `Nut slot (${unit})`, width: 0.12, align: "right" },
-      { label: "Intonation (cents)", width: 0.13, align: "right" },
+      { label: "Cents at 12th", width: 0.13, align: "right" },
       { label: `Saddle move (${unit})`, width: 0.14, align: "right" },
       { label: "Pull test N", width: 0.12, align: "right" },
       { label: "Spec N", width: 0.1, align: "right" },

@@ -72,9 +72,9 @@ export class PdfFlow {
   /** Splits text into lines no wider than `maxWidth` at `size`. */
   wrap(text: string, size: number, maxWidth: number, font = this.font): string[] {
     const lines: string[] = [];
-    for (const para of pdfSafe(text).split("\n")) {
+    for (const para of text.split("\n")) {
       let line = "";
-      for (const word of para.split(/\s+/)) {
+      for (const word of pdfSafe(para).split(/\s+/)) {
         const next = line ? `${line} ${word}` : word;
         if (font.widthOfTextAtSize(next, size) <= maxWidth || !line) line = next;
         else {

@@ -29,7 +29,7 @@ function mapSheet(sheet: SetupSheet, length: Convert, force: Convert): SetupShee
 export function sheetToDisplay(sheet: SetupSheet, unit: LengthUnit): SetupSheet {
   if (unit === "mm") return structuredClone(sheet);
   const d = INPUT_DECIMALS.in;
-  return mapSheet(sheet, (mm) => roundTo(fromMm(mm, unit), d), (n) => roundTo(newtonsToLbf(n), 3));
+  return mapSheet(sheet, (mm) => roundTo(fromMm(mm, unit), d), (n) => roundTo(newtonsToLbf(n), 4));
 }
 
 /** A form's numbers in `unit` → the stored sheet (mm, N), exactly. */

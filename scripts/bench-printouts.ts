@@ -1,0 +1,88 @@
+// npm run bench:printouts — how long the shop printouts take to generate, measured in process on
+// this machine (never asserted in tests): the 1:1 fret template of a 36-fret multi-scale 8-string
+// (711.2/647.7 mm, fret 8 square) on A4 and Letter, and its build sheet with a setup sheet. Target:
+// the template in under 1 s. Prints the first (cold) run and the median and p95 of warm runs, with
+// the load average beside them (other work on the machine moves the figures).
+import { cpus, loadavg } from "node:os";
+import { computeSpec } from "../lib/lutherie/compute-spec";
+import { presetById } from "../lib/lutherie/presets";
+import { renderBuildSheetPdf, type BuildSheetData } from "../lib/printing/build-sheet-pdf";
+import { renderFretTemplatePdf } from "../lib/printing/fret-template-pdf";
+import type { PaperSize } from "../lib/printing/paper";
+import { fretTemplateDrawing, templateCaption } from "../lib/printing/template-drawing";
+import { instrumentSpecSchema } from "../lib/schemas/instrument-spec";
+import { setupSheetSchema } from "../lib/schemas/setup-sheet";
+import { checkSetupSheet } from "../lib/setup/checks";
+import { setupFigures, specStrings } from "../lib/setup/figures";
+import { DEFAULT_SETUP_RANGES } from "../lib/setup/ranges";
+
+const RUNS = Number(process.env.BENCH_RUNS ?? 30);
+const spec = instrumentSpecSchema.parse({ ...presetById("fanned-eight").spec, frets: 36, nutWidth: 48, lastFretWidth: 72 });
+
+async function template(paper: PaperSize) {
+  // What the download route does after reading the approved version: drawing, then the PDF.
+  const result = computeSpec(spec);
+  const drawing = fretTemplateDrawing({ result, unit: "mm", title: "Bench - 36-fret multi-scale", subtitle: templateCaption(result, "mm", { version: 1, approvedAt: new Date().toISOString() }) });
+  return renderFretTemplatePdf(drawing, paper);
+}
+
+function buildSheetData(): BuildSheetData {
+  const result = computeSpec(spec);
+  const strings = specStrings(result);
+  const values = setupSheetSchema.parse({
+    strings: strings.map((s) => ({ string: s.string, actionAt12Mm: 1.9, nutSlotAt1Mm: 0.1, intonationCents: 1, pullTest: { forceN: 2, deflectionMm: 4.5 } })),
+    neck: { reliefMm: 0.2, reliefAtFret: 8 },
+    pickups: spec.pickups.map((p) => ({ label: p.label, bassSideMm: 2.4, trebleSideMm: 1.8 })),
+    electronics: { checks: { jack_output: true } },
+  });
+  const now = new Date().toISOString();
+  return {
+    workshopName: "Bench Workshop",
+    logo: null,
+    unit: "mm",
+    generatedAt: now,
+    commission: { number: "2026-999", title: "Bench build", clientName: "Bench Client", builderName: "Bench Builder", stageLabel: "Final setup", targetDate: null },
+    spec: { version: 1, approvedAt: now, spec, result },
+    stages: Array.from({ length: 10 }, (_, i) => ({ at: now, fromLabel: `Stage ${i}`, toLabel: `Stage ${i + 1}`, actor: "Bench Builder", note: null })),
+    setup: {
+      revision: { id: 1, revision: 1, status: "signed", values, specVersion: 1, reopenNote: null, createdAt: now, updatedAt: now, updatedBy: { id: 1, name: "Bench Builder" }, builderSignedAt: now, builderSignedBy: { id: 1, name: "Bench Builder" }, ownerSignedAt: null, ownerSignedBy: null, signedAt: now },
+      figures: setupFigures(values, strings),
+      issues: checkSetupSheet(values, DEFAULT_SETUP_RANGES.guitar, { stringCount: strings.length, strings }),
+    },
+  };
+}
+
+async function measure(label: string, fn: () => Promise<Uint8Array>) {
+  let t = performance.now();
+  const first = await fn();
+  const cold = performance.now() - t;
+  const times: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    t = performance.now();
+    await fn();
+    times.push(performance.now() - t);
+  }
+  times.sort((a, b) => a - b);
+  const pick = (q: number) => times[Math.min(times.length - 1, Math.ceil(q * times.length) - 1)]!;
+  const row = { label, cold: cold.toFixed(1), median: pick(0.5).toFixed(1), p95: pick(0.95).toFixed(1), max: times.at(-1)!.toFixed(1), kb: (first.byteLength / 1024).toFixed(0) };
+  console.log(`| ${row.label} | ${row.cold} ms | ${row.median} ms | ${row.p95} ms | ${row.max} ms | ${row.kb} KB |`);
+  return times.at(-1)!;
+}
+
+async function main() {
+  console.log(`[bench] printouts, ${RUNS} warm runs each, in process (Node ${process.version}), ${cpus().length} cores, load ${loadavg()[0]!.toFixed(2)}`);
+  console.log("| printout | first run (cold) | median | p95 | slowest | size |");
+  console.log("|---|---|---|---|---|---|");
+  const worst = Math.max(
+    await measure("fret template, 36-fret multi-scale, A4", () => template("a4")),
+    await measure("fret template, 36-fret multi-scale, Letter", () => template("letter")),
+  );
+  const data = buildSheetData();
+  await measure("build sheet with setup sheet, A4", () => renderBuildSheetPdf(data, "a4"));
+  console.log(`[bench] slowest warm template: ${worst.toFixed(1)} ms (target < 1000 ms: ${worst < 1000 ? "met" : "NOT met"}); load now ${loadavg()[0]!.toFixed(2)}`);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exitCode = 1;
+});
