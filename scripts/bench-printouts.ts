@@ -16,7 +16,9 @@ import { checkSetupSheet } from "../lib/setup/checks";
 import { setupFigures, specStrings } from "../lib/setup/figures";
 import { DEFAULT_SETUP_RANGES } from "../lib/setup/ranges";
 
-const RUNS = Number(process.env.BENCH_RUNS ?? 30);
+// `npm run bench:printouts -- --runs 100` for more warm runs.
+const runsArg = process.argv.indexOf("--runs");
+const RUNS = runsArg > 0 ? Math.max(1, Number(process.argv[runsArg + 1]) || 30) : 30;
 const spec = instrumentSpecSchema.parse({ ...presetById("fanned-eight").spec, frets: 36, nutWidth: 48, lastFretWidth: 72 });
 
 async function template(paper: PaperSize) {

@@ -13,7 +13,7 @@ export function PrintoutsCard({ slug, commissionId, unit, hasApprovedSpec }: { s
       <CardBody className="space-y-3">
         {hasApprovedSpec ? (
           <form method="get" action={`${base}/fret-template`} className="flex flex-wrap items-end gap-3">
-            <Field id="printout-paper" label="Paper" className="w-40">
+            <Field id="printout-paper" label="Paper" className="w-56">
               <Select
                 id="printout-paper"
                 name="paper"

@@ -2,6 +2,7 @@
 // centre line and the fretboard outline, tiled across A4 or Letter pages with overlap, alignment
 // marks, page labels and a calibration ruler on every page.
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
+import { formatLength, type LengthUnit } from "@/lib/lutherie/units";
 import { PAPER, mmToPt, type PaperSize } from "./paper";
 import { pdfSafe } from "./pdf-text";
 import { clipToWindow, planTiles, type Tile } from "./tiling";
@@ -34,6 +35,8 @@ export interface FretTemplateDrawing {
   outline: BoardPoint[];
   /** Centre line from nut to bridge. */
   centre: TemplateLine;
+  /** The unit of the page labels (the fret labels come already formatted); mm when left out. */
+  unit?: LengthUnit;
 }
 
 export interface TemplateLayout {
@@ -185,7 +188,9 @@ function drawHeader(page: PDFPage, d: FretTemplateDrawing, tile: Tile, count: nu
   const x = mmToPt(layout.marginMm);
   page.drawText(pdfSafe(d.title), { x, y: top - 10, size: 11, font: bold });
   page.drawText(pdfSafe(d.subtitle), { x, y: top - 22, size: 8, font });
-  const label = `Page ${tile.index + 1} of ${count} - board ${tile.fromMm.toFixed(1)} to ${tile.toMm.toFixed(1)} mm from the nut - ${PAPER[layout.paper].name}`;
+  const unit = d.unit ?? "mm";
+  const at = (mm: number) => formatLength(mm, unit);
+  const label = `Page ${tile.index + 1} of ${count} - board ${at(tile.fromMm)} to ${at(tile.toMm)} ${unit} from the nut - ${PAPER[layout.paper].name}`;
   page.drawText(pdfSafe(label), { x, y: top - 34, size: 8, font: bold, color: ACCENT });
   page.drawText("Print at 100% (actual size), never 'fit to page'. Check the rulers below before cutting.", { x, y: top - 46, size: 7, font, color: ACCENT });
 }

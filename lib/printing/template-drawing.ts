@@ -99,6 +99,7 @@ export function fretTemplateDrawing(input: TemplateDrawingInput): TemplateDrawin
     frets: templateFrets,
     outline,
     centre,
+    unit,
     widthsAssumed: !given,
   };
 }

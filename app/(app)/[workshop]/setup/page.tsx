@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { RangesForm } from "@/components/setup/ranges-form";
 import { StatusBadge } from "@/components/setup/setup-readout";
 import { Badge } from "@/components/ui/badge";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -10,6 +9,7 @@ import { formatLength } from "@/lib/lutherie/units";
 import { getWorkshopSetupRanges } from "@/lib/data/setup-ranges";
 import { listSetupQueue } from "@/lib/data/setup-sheets";
 import { RANGE_FIELDS } from "@/lib/schemas/setup-ranges";
+import { RangesForm } from "./ranges-form";
 
 export const metadata: Metadata = { title: "Final setup" };
 

@@ -5,8 +5,6 @@ import { SafetyCaution } from "@/components/build-math/safety-caution";
 import { PrintoutsCard } from "@/components/setup/printouts-card";
 import { SetupChecks } from "@/components/setup/setup-checks";
 import { SetupReadout, StatusBadge } from "@/components/setup/setup-readout";
-import { SetupSheetForm } from "@/components/setup/setup-sheet-form";
-import { SignOffPanel } from "@/components/setup/sign-off-panel";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -15,6 +13,8 @@ import { getSetupSheetView } from "@/lib/data/setup-sheets";
 import { AppError } from "@/lib/http/errors";
 import { idParamSchema } from "@/lib/schemas/ids";
 import { setupSheetQuerySchema } from "@/lib/schemas/setup-sheet-out";
+import { SetupSheetForm } from "./setup-sheet-form";
+import { SignOffForm } from "./sign-off-form";
 
 export const metadata: Metadata = { title: "Final setup" };
 
@@ -53,7 +53,7 @@ export default async function SetupPage({ params, searchParams }: Props) {
         <CardBody className="space-y-4">
           {view.lockedReason && !view.can.edit ? <Alert tone="info">{view.lockedReason}</Alert> : null}
           {view.can.edit ? (
-            <SetupSheetForm key={`${view.sheet?.id ?? "new"}-${view.sheet?.updatedAt ?? ""}`} slug={slug} view={view} />
+            <SetupSheetForm key={view.commission.id} slug={slug} view={view} />
           ) : view.sheet ? (
             <>
               <SetupReadout view={view} />
@@ -64,7 +64,7 @@ export default async function SetupPage({ params, searchParams }: Props) {
               {ctx.scope.role === "client" ? "The workshop has not signed off the final setup yet." : "No setup sheet has been filled in yet."}
             </p>
           )}
-          {view.can.sign || view.can.reopen ? <SignOffPanel slug={slug} view={view} /> : null}
+          {view.can.sign || view.can.reopen ? <SignOffForm slug={slug} view={view} /> : null}
           {view.revisions.length > 1 ? (
             <nav aria-label="Revisions" className="flex flex-wrap gap-2 text-sm">
               <span className="text-graphite-500">Revisions:</span>

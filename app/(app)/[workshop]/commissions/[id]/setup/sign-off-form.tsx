@@ -4,14 +4,14 @@
 // sheet as a new revision, with the reason.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { reopenSetupSheetAction, signSetupSheetAction } from "@/app/(app)/[workshop]/commissions/[id]/setup/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, describedBy } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import type { SetupSheetView } from "@/lib/schemas/setup-sheet-out";
+import { reopenSetupSheetAction, signSetupSheetAction } from "./actions";
 
-export function SignOffPanel({ slug, view }: { slug: string; view: SetupSheetView }) {
+export function SignOffForm({ slug, view }: { slug: string; view: SetupSheetView }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [note, setNote] = useState("");

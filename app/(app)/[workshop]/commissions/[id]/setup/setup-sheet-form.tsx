@@ -7,7 +7,6 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
-import { saveSetupSheetAction, signSetupSheetAction } from "@/app/(app)/[workshop]/commissions/[id]/setup/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, describedBy } from "@/components/ui/field";
@@ -20,8 +19,9 @@ import { checkSetupSheet } from "@/lib/setup/checks";
 import { setupFigures } from "@/lib/setup/figures";
 import { describePullTest, describeSaddleMove } from "@/lib/setup/format";
 import { setupForceUnit, sheetFromDisplay, sheetToDisplay } from "@/lib/setup/sheet-units";
-import { NumberCell, setupFieldId, useSetupError } from "./setup-fields";
-import { SetupChecks } from "./setup-checks";
+import { SetupChecks } from "@/components/setup/setup-checks";
+import { NumberCell, setupFieldId, useSetupError } from "@/components/setup/setup-fields";
+import { saveSetupSheetAction, signSetupSheetAction } from "./actions";
 
 type Values = SetupSheet;
 

@@ -5,7 +5,6 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { Fragment, useState } from "react";
 import { useForm, type Resolver } from "react-hook-form";
-import { resetSetupRangesAction, saveSetupRangesAction } from "@/app/(app)/[workshop]/setup/actions";
 import { parseNumberInput } from "@/components/build-math/spec-form-fields";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -14,6 +13,7 @@ import { TBody, THead, Table, Td, Th } from "@/components/ui/table";
 import type { LengthUnit } from "@/lib/lutherie/units";
 import { RANGE_FIELDS, setupRangesSchema, type WorkshopSetupRanges } from "@/lib/schemas/setup-ranges";
 import { rangesFromDisplay, rangesToDisplay } from "@/lib/setup/range-units";
+import { resetSetupRangesAction, saveSetupRangesAction } from "./actions";
 
 const FAMILIES = [
   { key: "guitar", label: "Guitar" },
