@@ -1,12 +1,11 @@
 import type { Trx } from "./transaction";
 
 /**
- * Whether the commission's final setup sheet is signed off. Until the setup-sheet feature stores
- * sheets there is none, so the delivery guard reports it as missing.
+ * Whether the commission's final setup sheet is signed off: its CURRENT revision (the highest)
+ * carries every sign-off the workshop asks for (`signed_at`). A sheet reopened after signing is a
+ * new, unsigned revision, so delivery waits for it to be signed again.
  */
 export async function isSetupSheetSigned(trx: Trx, workshopId: number, commissionId: number): Promise<boolean> {
-  const exists = await trx.schema.hasTable("setup_sheets");
-  if (!exists) return false;
-  const row = await trx("setup_sheets").where({ workshop_id: workshopId, commission_id: commissionId }).whereNotNull("signed_at").first("id");
-  return !!row;
+  const row = await trx("setup_sheets").where({ workshop_id: workshopId, commission_id: commissionId }).orderBy("revision", "desc").first("signed_at");
+  return !!row?.signed_at;
 }

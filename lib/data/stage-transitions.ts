@@ -11,6 +11,7 @@ import { DELIVERED, DEPOSIT, FINAL_SETUP, SPEC, stageLabel, type BuildStage } fr
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow, type CommissionRow } from "./commission-access";
 import { paidFlags, paymentTotals } from "./payment-totals";
+import { setupSummaryForDelivery } from "./setup-sheets";
 import { isSetupSheetSigned } from "./setup-status";
 import { inTransaction, iso, type Trx } from "./transaction";
 import { getWorkshopSettings, type WorkshopSettings } from "./workshop-settings";
@@ -126,7 +127,9 @@ export async function transitionCommission(scope: WorkshopScope, id: number, act
       if (planned.kind === "forbidden") throw forbidden(planned.reason);
       throw new AppError("conflict", planned.reason, planned.missing?.map((m) => ({ path: "stage", message: m })));
     }
-    const historyId = await applyTransition(trx, scope, row, planned, settings, note);
+    // The delivery e-mail carries the signed setup sheet's summary.
+    const setupSummary = planned.to === DELIVERED ? await setupSummaryForDelivery(trx, scope, row.id, settings) : undefined;
+    const historyId = await applyTransition(trx, scope, row, planned, settings, note, { setupSummary });
     return { historyId, from: planned.from, to: planned.to, needsOwnerSignoff: planned.needsOwnerSignoff };
   });
 }

@@ -2,6 +2,7 @@
 // centre line and the fretboard outline, tiled across A4 or Letter pages with overlap, alignment
 // marks, page labels and a calibration ruler on every page.
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
+import { formatLength, type LengthUnit } from "@/lib/lutherie/units";
 import { PAPER, mmToPt, type PaperSize } from "./paper";
 import { pdfSafe } from "./pdf-text";
 import { clipToWindow, planTiles, type Tile } from "./tiling";
@@ -34,6 +35,8 @@ export interface FretTemplateDrawing {
   outline: BoardPoint[];
   /** Centre line from nut to bridge. */
   centre: TemplateLine;
+  /** The unit of the page labels (the fret labels come already formatted); mm when left out. */
+  unit?: LengthUnit;
 }
 
 export interface TemplateLayout {
@@ -86,8 +89,29 @@ export function boardToPage(p: BoardPoint, tile: Tile, layout: TemplateLayout): 
   return { x: mmToPt(layout.centreXMm + p.y), y: mmToPt(paper.heightMm - fromTopMm) };
 }
 
+/** Longest stretch of board one line covers (a slanted fret on a fanned neck), mm. */
+function longestAxialExtent(d: FretTemplateDrawing): number {
+  const lines = [d.nut, d.bridge, ...d.frets];
+  return Math.max(...lines.map((l) => Math.abs(l.a.x - l.b.x)));
+}
+
+/**
+ * The layout for a drawing on a paper size. The overlap grows with the fan so that every fret line
+ * is whole on at least one page (and the tape joint crosses it on the other); the centre line moves
+ * right for a wide board so the bass-side labels stay on the paper.
+ */
+export function layoutFor(drawing: FretTemplateDrawing, paper: PaperSize): TemplateLayout {
+  const halfWidth = Math.max(...drawing.outline.map((p) => Math.abs(p.y)));
+  return {
+    paper,
+    ...DEFAULT_LAYOUT,
+    overlapMm: Math.max(DEFAULT_LAYOUT.overlapMm, Math.ceil(longestAxialExtent(drawing)) + 10),
+    centreXMm: Math.max(DEFAULT_LAYOUT.centreXMm, DEFAULT_LAYOUT.marginMm + 16 + halfWidth),
+  };
+}
+
 export async function renderFretTemplatePdf(drawing: FretTemplateDrawing, paperSize: PaperSize): Promise<Uint8Array> {
-  const layout: TemplateLayout = { paper: paperSize, ...DEFAULT_LAYOUT };
+  const layout = layoutFor(drawing, paperSize);
   const { paper } = templatePageGeometry(layout);
   const doc = await PDFDocument.create();
   doc.setTitle(pdfSafe(`Fret template - ${drawing.title}`));
@@ -146,7 +170,7 @@ function drawBoard(page: PDFPage, d: FretTemplateDrawing, tile: Tile, layout: Te
   // board position on both pages of an overlap.
   for (const mark of tile.alignMarksMm) {
     const left = boardToPage({ x: mark, y: -layout.centreXMm + layout.marginMm + 4 }, tile, layout);
-    const right = boardToPage({ x: mark, y: 108 }, tile, layout);
+    const right = boardToPage({ x: mark, y: PAPER[layout.paper].widthMm - layout.marginMm - 14 - layout.centreXMm }, tile, layout);
     line(page, left, right, 0.3, GREY, [3, 3]);
     for (const c of [left, right]) {
       line(page, offset(c, -8, 0), offset(c, 8, 0), 0.5);
@@ -164,7 +188,9 @@ function drawHeader(page: PDFPage, d: FretTemplateDrawing, tile: Tile, count: nu
   const x = mmToPt(layout.marginMm);
   page.drawText(pdfSafe(d.title), { x, y: top - 10, size: 11, font: bold });
   page.drawText(pdfSafe(d.subtitle), { x, y: top - 22, size: 8, font });
-  const label = `Page ${tile.index + 1} of ${count} - board ${tile.fromMm.toFixed(1)} to ${tile.toMm.toFixed(1)} mm from the nut - ${PAPER[layout.paper].name}`;
+  const unit = d.unit ?? "mm";
+  const at = (mm: number) => formatLength(mm, unit);
+  const label = `Page ${tile.index + 1} of ${count} - board ${at(tile.fromMm)} to ${at(tile.toMm)} ${unit} from the nut - ${PAPER[layout.paper].name}`;
   page.drawText(pdfSafe(label), { x, y: top - 34, size: 8, font: bold, color: ACCENT });
   page.drawText("Print at 100% (actual size), never 'fit to page'. Check the rulers below before cutting.", { x, y: top - 46, size: 7, font, color: ACCENT });
 }

@@ -42,6 +42,9 @@ export const DEFAULT_SETUP_RANGES: Record<InstrumentFamily, SetupRanges> = {
   },
 };
 
+/** How far a pull test's tension may stray from the spec's before the sheet warns, percent. */
+export const PULL_TEST_TOLERANCE_PERCENT = 15;
+
 /** Hard limits: values outside these cannot be a real measurement (a slip of the unit, a typo). */
 export const IMPOSSIBLE = {
   actionMm: { min: 0, max: 8 },

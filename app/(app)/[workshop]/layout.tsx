@@ -12,6 +12,7 @@ export default async function WorkshopLayout({ children, params }: { children: R
   const links = [
     { href: `/${workshop.slug}`, label: "Home" },
     ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
+    ...(can("setup.read") ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
   ];
   return (
     <div className="mx-auto max-w-6xl px-4 py-6 sm:px-6">
