@@ -24,6 +24,7 @@ export const PERMISSIONS = [
   "commission.write",
   "commission.advance", // move a commission to its next stage
   "commission.signoff", // the owner's sign-off on a builder's stage change
+  "commission.assign", // choose a commission's builder and cohort
   "spec.read",
   "spec.draft",
   "spec.approve", // the client's consent to a locked spec version
@@ -45,6 +46,8 @@ export const PERMISSIONS = [
   "ledger.read",
   "reconciliation.manage",
   "overview.read", // the workshop's dashboards
+  "cohort.read", // course cohorts (a builder: the cohorts they belong to)
+  "cohort.manage", // create, change and remove cohorts
   "outbox.read", // e-mail that could not be delivered
   "outbox.retry",
 ] as const;
@@ -67,6 +70,7 @@ const BUILDER: Permission[] = [
   "setup.write",
   "setup.signoff",
   "member.names",
+  "cohort.read",
 ];
 
 const BOOKKEEPER: Permission[] = [
@@ -84,6 +88,7 @@ const BOOKKEEPER: Permission[] = [
   "ledger.read",
   "reconciliation.manage",
   "overview.read",
+  "cohort.read",
 ];
 
 // The owner runs the workshop: everything except approving a spec, which is the client's consent.

@@ -8,6 +8,7 @@ import type { CommissionPage, CommissionSummary } from "@/lib/schemas/commission
 import { formatCommissionNumber } from "@/lib/workflow/commission-number";
 import { CANCELLED, DELIVERED, SPEC, stageLabel, stageLine, type BuildStage } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
+import { checkCohortOfWorkshop } from "./cohorts";
 import { getVisibleCommissionRow, visibleCommissions, type CommissionRow } from "./commission-access";
 import { inTransaction, iso, type Trx } from "./transaction";
 import { getWorkshopSettings } from "./workshop-settings";
@@ -66,6 +67,7 @@ export async function listCommissions(scope: WorkshopScope, query: CommissionLis
   if (query.builder === "none") base.whereNull("c.builder_user_id");
   else if (query.builder !== undefined) base.where("c.builder_user_id", query.builder);
   if (query.client !== undefined) base.where("c.client_user_id", query.client);
+  if (query.cohort !== undefined) base.where("c.cohort_id", query.cohort);
   if (query.overdue !== undefined) {
     const overdue = (q: typeof base) => q.whereNotNull("c.target_date").where("c.target_date", "<", todayUtc()).whereNotIn("c.stage", [DELIVERED, CANCELLED]);
     if (query.overdue) overdue(base);
@@ -199,6 +201,11 @@ export async function updateCommission(scope: WorkshopScope, id: number, patch: 
     if (patch.builderId !== undefined) {
       await checkBuilder(trx, scope, patch.builderId);
       update.builder_user_id = patch.builderId;
+    }
+    if (patch.cohortId !== undefined) {
+      if (scope.role !== "owner") throw forbidden("Only the owner can change the cohort.");
+      await checkCohortOfWorkshop(trx, scope, patch.cohortId);
+      update.cohort_id = patch.cohortId;
     }
     const touchesDeposit = patch.priceMinor !== undefined || patch.depositPercent !== undefined || patch.depositMinor !== undefined;
     if (touchesDeposit) {

@@ -28,6 +28,8 @@ export const commissionPatchSchema = z
     /** An explicit deposit amount overrides the percentage (before approval only). */
     depositMinor: z.int().min(0).max(1e11),
     targetDate: isoDate.nullable(),
+    /** The course cohort it is built in (owner), or null to take it out. */
+    cohortId: id.nullable(),
   })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: "Send at least one field to change." });

@@ -117,9 +117,12 @@ test("a new person signs up, creates a workshop and becomes its owner", async ({
   await page.getByRole("button", { name: "Create the account" }).click();
   await expect(page).toHaveURL(/\/workshops\/new$/);
   const name = `Founders Bench ${Date.now()}`;
-  await page.getByLabel("Workshop name").fill(name);
-  // The address follows the name until edited.
-  await expect(page.getByLabel("Address")).toHaveValue(name.toLowerCase().replace(/ /g, "-"));
+  // The address follows the name until edited. Typed again until the form has hydrated: on a busy
+  // machine the first keystrokes can land before React is listening.
+  await expect(async () => {
+    await page.getByLabel("Workshop name").fill(name);
+    await expect(page.getByLabel("Address")).toHaveValue(name.toLowerCase().replace(/ /g, "-"), { timeout: 1000 });
+  }).toPass({ timeout: 30_000 });
   await page.getByLabel("Lengths shown in").selectOption("in");
   await page.getByLabel("Currency").selectOption("USD");
   await page.getByRole("button", { name: "Create the workshop" }).click();

@@ -5,11 +5,12 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@/lib/auth/permissions";
 import { closeTestDb, testDb } from "../setup/test-db";
 import { createWorkshopWithMembers, uniqueEmail, type TestWorkshop } from "./fixtures";
+import { describeRoleMatrix, type MatrixRoute, type MatrixWho } from "./role-matrix";
 import { anonymous, signIn, type HttpSession } from "./session";
 
 let a: TestWorkshop;
 let b: TestWorkshop;
-const as: Partial<Record<Role | "outsider" | "anonymous", HttpSession>> = {};
+const as: Partial<Record<MatrixWho, HttpSession>> = {};
 let invitationId: number;
 let failedMessageId: number;
 
@@ -36,12 +37,7 @@ beforeAll(async () => {
 });
 afterAll(closeTestDb);
 
-type Who = keyof typeof as;
-type Route = { name: string; method: string; path: () => string; body?: () => unknown; allowed: Role[]; ok: number };
-
-// The role tests run in the order owner, builder, bookkeeper, client, so a permitted change
-// (the owner's) happens once and the refusals after it show the permission is checked first.
-const ROUTES: Route[] = [
+const ROUTES: MatrixRoute[] = [
   { name: "list members", method: "GET", path: () => `/api/workshops/${a.slug}/members`, allowed: ["owner", "bookkeeper", "builder"], ok: 200 },
   { name: "change a role", method: "PATCH", path: () => `/api/workshops/${a.slug}/members/${a.builder.membershipId}`, body: () => ({ role: "builder" }), allowed: ["owner"], ok: 200 },
   { name: "remove a member", method: "DELETE", path: () => `/api/workshops/${a.slug}/members/${a.members.filter((m) => m.role === "client")[1]!.membershipId}`, allowed: ["owner"], ok: 204 },
@@ -52,45 +48,7 @@ const ROUTES: Route[] = [
   { name: "retry an e-mail", method: "POST", path: () => `/api/workshops/${a.slug}/outbox/${failedMessageId}/retry`, allowed: ["owner"], ok: 200 },
 ];
 
-async function call(who: Who, r: Route, path = r.path()) {
-  const body = r.body?.();
-  return as[who]!.fetch(path, { method: r.method, ...(body !== undefined ? { json: body } : {}) });
-}
-
-describe("member and invitation routes, role by role", () => {
-  for (const r of ROUTES) {
-    describe(`${r.method} ${r.name}`, () => {
-      it("answers 401 with the error body when signed out", async () => {
-        const res = await call("anonymous", r);
-        expect(res.status).toBe(401);
-        expect(await res.json()).toEqual({ error: { code: "unauthenticated", message: "Sign in to continue." } });
-      });
-
-      it("answers 404, as for a workshop that does not exist, to a member of another workshop", async () => {
-        const outsider = await call("outsider", r);
-        const unknown = await call("owner", r, r.path().replace(a.slug, "no-such-workshop-here"));
-        expect(outsider.status).toBe(404);
-        expect(unknown.status).toBe(404);
-        const [x, y] = [await outsider.json(), await unknown.json()];
-        expect(x).toEqual({ error: { code: "not_found", message: "No such workshop." } });
-        expect(y).toEqual(x);
-      });
-
-      for (const role of ["owner", "builder", "bookkeeper", "client"] as Role[]) {
-        const permitted = r.allowed.includes(role);
-        it(`${permitted ? "lets" : "refuses"} the ${role}`, async () => {
-          const res = await call(role, r);
-          if (permitted) {
-            expect(res.status).toBe(r.ok);
-          } else {
-            expect(res.status).toBe(403);
-            expect(await res.json()).toEqual({ error: { code: "forbidden", message: "You do not have permission to do this." } });
-          }
-        });
-      }
-    });
-  }
-});
+describeRoleMatrix("member and invitation routes, role by role", ROUTES, { slug: () => a.slug, as: (who) => as[who]! });
 
 // Everyone but the second client, whom the owner removed above.
 const remaining = () => a.members.filter((m) => m !== a.members.filter((x) => x.role === "client")[1]);

@@ -13,6 +13,9 @@ export default async function WorkshopLayout({ children, params }: { children: R
     { href: `/${workshop.slug}`, label: "Home" },
     ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
     ...(can("setup.read") ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
+    ...(can("overview.read") ? [{ href: `/${workshop.slug}/overview`, label: "Overview" }] : []),
+    ...(can("cohort.read") ? [{ href: `/${workshop.slug}/cohorts`, label: "Cohorts" }] : []),
+    ...(can("settings.manage") ? [{ href: `/${workshop.slug}/settings`, label: "Settings" }] : []),
   ];
   return (
     <div className="mx-auto max-w-6xl px-4 py-6 sm:px-6">
