@@ -50,8 +50,13 @@ export async function readStoredFile(key: string, maxBytes: number): Promise<Buf
   return bytes;
 }
 
+export interface StoredFile {
+  key: string;
+  size: number;
+}
+
 /** Stores bytes as a new private file; its key and size. */
-export async function storeFile(bytes: Buffer, name: string, type: string): Promise<{ key: string; size: number }> {
+export async function storeFile(bytes: Buffer, name: string, type: string): Promise<StoredFile> {
   let result: UploadFileResult;
   try {
     result = await utapi().uploadFiles(new UTFile([new Uint8Array(bytes)], name, { type }), { acl: "private" });

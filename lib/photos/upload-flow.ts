@@ -12,7 +12,7 @@ import { AppError, toErrorBody } from "@/lib/http/errors";
 import type { PhotoUploadInput, PhotoUploadResult } from "@/lib/schemas/photo";
 import { preparePhoto } from "./images";
 import { MAX_PHOTO_BYTES, uploadBatchProblem, type ClaimedFile } from "./rules";
-import { deleteStoredFiles, readStoredFile, storeFile } from "./store";
+import { deleteStoredFiles, readStoredFile, storeFile, type StoredFile } from "./store";
 
 /** What the middleware hands to the callback (signed by the upload service in between). */
 export type PhotoUploadMetadata = {
@@ -46,14 +46,17 @@ export async function ingestUploadedPhoto(meta: PhotoUploadMetadata, file: { key
 
     const original = await readStoredFile(file.key, MAX_PHOTO_BYTES);
     const photo = await preparePhoto(original, file.name);
-    // Both versions at once (the upload waits for this callback); each key is noted as soon as it
-    // exists, so a failure of the other still cleans it up.
-    const keep = async (bytes: Buffer, suffix: string) => {
-      const f = await storeFile(bytes, `${baseName(file.name)}${suffix}.jpg`, photo.contentType);
-      stored.push(f.key);
-      return f;
-    };
-    const [full, thumb] = await Promise.all([keep(photo.full.bytes, ""), keep(photo.thumb.bytes, "-thumb")]);
+    // Both versions at once (the upload waits for this callback). Wait for both to settle, so a
+    // version that got in while the other failed is known, and deleted with the rest.
+    const settled = await Promise.allSettled([
+      storeFile(photo.full.bytes, `${baseName(file.name)}.jpg`, photo.contentType),
+      storeFile(photo.thumb.bytes, `${baseName(file.name)}-thumb.jpg`, photo.contentType),
+    ]);
+    const kept = settled.flatMap((v) => (v.status === "fulfilled" ? [v.value] : []));
+    stored.push(...kept.map((f) => f.key));
+    const failed = settled.find((v): v is PromiseRejectedResult => v.status === "rejected");
+    if (failed) throw failed.reason;
+    const [full, thumb] = kept as [StoredFile, StoredFile];
     // The original still carries its metadata (a phone's GPS position among it): it goes now.
     await deleteStoredFiles([file.key]);
 

@@ -51,7 +51,7 @@ test("the builder uploads a stage photo with a progress bar, and the client sees
 
   const photo = await jpegWithGps(2400, 1800, { seed: 21, quality: 92 });
   await builder.getByLabel("Caption").fill("Body blank glued up, clamps off");
-  await builder.getByLabel("Photos").setInputFiles({ name: "body-blank.jpg", mimeType: "image/jpeg", buffer: photo });
+  await builder.getByLabel("Photos", { exact: true }).setInputFiles({ name: "body-blank.jpg", mimeType: "image/jpeg", buffer: photo });
   const progress = await watchProgress(builder);
   await builder.getByRole("button", { name: "Upload" }).click();
   const bar = builder.getByRole("progressbar", { name: "Upload progress" });
@@ -90,11 +90,13 @@ test("with the upload service down the builder is told so, and nothing appears",
   await page.goto(photosPage());
   const before = await page.getByRole("img").count();
   await page.getByLabel("Caption").fill("Taken during the outage");
-  await page.getByLabel("Photos").setInputFiles({ name: "outage.jpg", mimeType: "image/jpeg", buffer: await jpegWithGps(300, 200, { seed: 22 }) });
+  await page.getByLabel("Photos", { exact: true }).setInputFiles({ name: "outage.jpg", mimeType: "image/jpeg", buffer: await jpegWithGps(300, 200, { seed: 22 }) });
   await setFakeOutage("unavailable");
   try {
     await page.getByRole("button", { name: "Upload" }).click();
-    await expect(page.getByRole("alert")).toContainText("The photo service could not be reached, so the upload did not go through. Nothing was saved");
+    await expect(page.getByRole("alert").filter({ hasText: "photo service" })).toHaveText(
+      "The photo service could not be reached, so the upload did not go through. Nothing was saved; try again in a moment.",
+    );
   } finally {
     await setFakeOutage("none");
   }

@@ -88,7 +88,7 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
     phase === "sending" ? `Uploading… ${Math.round(progress)} %` : phase === "processing" ? "Removing location data and making thumbnails…" : phase === "done" ? "Uploaded" : phase === "failed" ? "Not uploaded" : "";
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-4" aria-label="Upload photos">
+    <form onSubmit={submit} noValidate className="space-y-4" aria-label="Photo upload">
       {notice ? <Alert tone={notice.tone}>{notice.text}</Alert> : null}
       <Field id="photo-caption" label="Caption" hint="What the photos show, e.g. “Fret slots cut, before the wire goes in”. It goes with every photo of this upload." error={errors.caption}>
         <Input id="photo-caption" value={caption} maxLength={300} onChange={(e) => setCaption(e.target.value)} {...describedBy("photo-caption", errors.caption)} />
