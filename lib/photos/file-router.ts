@@ -54,10 +54,6 @@ export function formatUploadError(err: UploadThingError): UploadErrorBody {
     const issues = zodIssues(err.cause).map((i) => ({ ...i, path: i.path ? `input.${i.path}` : "input" }));
     return body("validation_failed", issues[0]?.message ?? "Some fields are not valid.", issues);
   }
-  if (err.message.startsWith("Invalid config: FileCountMismatch")) {
-    const message = `At most ${MAX_PHOTOS_PER_UPLOAD} photos per upload.`;
-    return body("validation_failed", message, [{ path: "files", message }]);
-  }
   if (err.code === "NOT_FOUND") return body("not_found", err.message);
   if (err.code === "FORBIDDEN") return body("forbidden", err.message);
   if (err.code.startsWith("INTERNAL")) return body("internal", "The upload could not be started. Nothing was saved; try again in a moment.");
