@@ -11,5 +11,8 @@ export default defineConfig({
     hookTimeout: 60_000,
     // Integration tests share one test database; files run in parallel, tests in a file in order.
     pool: "forks",
+    // next-auth imports "next/server" without an extension, which Node's ESM loader refuses; let
+    // Vite resolve it, so tests can import code that sits beside the session (lib/auth).
+    server: { deps: { inline: ["next-auth"] } },
   },
 });

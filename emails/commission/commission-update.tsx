@@ -1,4 +1,4 @@
-import { Button, Text } from "@react-email/components";
+import { Button, Link, Text } from "@react-email/components";
 import type { ReactNode } from "react";
 import { EmailLayout, styles } from "../layout";
 
@@ -31,6 +31,12 @@ export function CommissionUpdate({ p, preview, children, action = "Open your com
       </Text>
       <Text style={styles.muted}>
         Or open <span style={styles.link}>{p.commissionUrl}</span>
+      </Text>
+      <Text style={styles.muted}>
+        Photos of each stage:{" "}
+        <Link href={`${p.commissionUrl}/photos`} style={styles.link}>
+          {`${p.commissionUrl}/photos`}
+        </Link>
       </Text>
     </EmailLayout>
   );

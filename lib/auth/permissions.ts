@@ -35,6 +35,7 @@ export const PERMISSIONS = [
   "payment.refund",
   "photo.read",
   "photo.upload",
+  "photo.reference", // reference pictures on a commission whose spec is still being agreed
   "photo.remove",
   "setup.read",
   "setup.write",
@@ -53,7 +54,7 @@ export const PERMISSIONS = [
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const CLIENT: Permission[] = ["workshop.read", "commission.read", "commission.create", "spec.read", "spec.approve", "payment.read", "payment.pay", "photo.read", "setup.read"];
+const CLIENT: Permission[] = ["workshop.read", "commission.read", "commission.create", "spec.read", "spec.approve", "payment.read", "payment.pay", "photo.read", "photo.reference", "setup.read"];
 
 const BUILDER: Permission[] = [
   "workshop.read",

@@ -22,21 +22,25 @@ export interface WorkshopContext {
 
 const NO_SUCH_WORKSHOP = "No such workshop.";
 
-// One membership lookup per request, however many layouts and pages ask.
-const loadWorkshopContext = cache(async (slug: string): Promise<WorkshopContext> => {
-  const user = await requireUser();
+/** The membership of `userId` in workshop `slug`, as a context (without the user). */
+async function membershipContext(userId: number, slug: string): Promise<Omit<WorkshopContext, "user">> {
   if (typeof slug !== "string" || slug.length === 0 || slug.length > 64) throw notFound(NO_SUCH_WORKSHOP);
-  const m = await findMembershipBySlug(user.id, slug);
+  const m = await findMembershipBySlug(userId, slug);
   // Not a member and no such workshop look the same: both 404.
   if (!m) throw notFound(NO_SUCH_WORKSHOP);
-  const scope = mintWorkshopScope({ workshopId: m.workshop.id, membershipId: m.membershipId, userId: user.id, role: m.role });
+  const scope = mintWorkshopScope({ workshopId: m.workshop.id, membershipId: m.membershipId, userId, role: m.role });
   return {
-    user,
     membership: { id: m.membershipId, role: m.role },
     workshop: m.workshop,
     scope,
     can: (p) => can(m.role, p),
   };
+}
+
+// One membership lookup per request, however many layouts and pages ask.
+const loadWorkshopContext = cache(async (slug: string): Promise<WorkshopContext> => {
+  const user = await requireUser();
+  return { user, ...(await membershipContext(user.id, slug)) };
 });
 
 /**
@@ -58,4 +62,17 @@ export async function resolveWorkshopAccess(slug: string, required?: PermissionR
 export async function resolveProcessorEventScope(workshopId: number, commissionId: number): Promise<WorkshopScope | null> {
   const actor = await findProcessorEventActor(workshopId, commissionId);
   return actor ? mintWorkshopScope({ workshopId, membershipId: actor.membershipId, userId: actor.userId, role: actor.role }) : null;
+}
+
+/**
+ * The same check for work done on a member's behalf after their request has ended: the upload
+ * service's signed callback (lib/photos), whose metadata the upload route's middleware wrote
+ * after resolving that member's session with resolveWorkshopAccess. The membership is read again
+ * here, so someone removed from the workshop (or given another role) meanwhile is judged as they
+ * are now. Never call it with ids from a request body or query.
+ */
+export async function resolveMemberAccess(userId: number, slug: string, required?: PermissionRequirement): Promise<Omit<WorkshopContext, "user">> {
+  const ctx = await membershipContext(userId, slug);
+  if (required && !ctx.can(required)) throw forbidden();
+  return ctx;
 }
