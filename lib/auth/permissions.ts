@@ -66,7 +66,6 @@ const BUILDER: Permission[] = [
   "spec.draft",
   "photo.read",
   "photo.upload",
-  "photo.remove",
   "setup.read",
   "setup.write",
   "setup.signoff",
