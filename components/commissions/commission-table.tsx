@@ -37,7 +37,7 @@ function buildColumns(slug: string, showClient: boolean, showMoney: boolean) {
     helper.accessor("number", {
       header: "Number",
       cell: (info) => (
-        <Link href={`/${slug}/commissions/${info.row.original.id}`} className="font-mono font-semibold text-rosewood-700 underline-offset-2 hover:underline">
+        <Link href={`/${slug}/commissions/${info.row.original.id}`} className="whitespace-nowrap font-mono font-semibold text-rosewood-700 underline-offset-2 hover:underline">
           {info.getValue()}
         </Link>
       ),

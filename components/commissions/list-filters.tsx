@@ -33,6 +33,7 @@ export interface ListFiltersProps {
 
 export function ListFilters({ view, setView, stages, people, showBuilderFilter }: ListFiltersProps) {
   const [q, setQ] = useState(view.q);
+  const [more, setMore] = useState(false);
   // Back/Forward (or a link) may change the search in the address bar: follow it.
   useEffect(() => setQ(view.q), [view.q]);
   useEffect(() => {
@@ -50,54 +51,62 @@ export function ListFilters({ view, setView, stages, people, showBuilderFilter }
         </label>
         <Input id="commission-q" type="search" placeholder="Title or number" value={q} maxLength={80} onChange={(e) => setQ(e.target.value)} />
       </div>
-      <LabelledSelect id="commission-stage" label="Stage" value={view.stage ?? ""} onChange={(v) => setView({ stage: v || null })}>
-        <option value="">Every stage</option>
-        {stages.map((s) => (
-          <option key={s.key} value={s.key}>
-            {s.label}
-          </option>
-        ))}
-      </LabelledSelect>
-      <LabelledSelect id="commission-overdue" label="Target date" value={view.overdue === null ? "" : String(view.overdue)} onChange={(v) => setView({ overdue: v === "" ? null : v === "true" })}>
-        <option value="">Any</option>
-        <option value="true">Overdue only</option>
-        <option value="false">Not overdue</option>
-      </LabelledSelect>
-      {people && showBuilderFilter ? (
-        <LabelledSelect id="commission-builder" label="Builder" value={view.builder === null ? "" : String(view.builder)} onChange={(v) => setView({ builder: v === "none" ? "none" : num(v) })}>
-          <option value="">Any builder</option>
-          <option value="none">Not assigned</option>
-          {people.builders.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
+      <div className="flex items-end md:hidden">
+        <button type="button" aria-expanded={more} aria-controls="commission-more-filters" className="h-10 text-sm font-semibold text-rosewood-700" onClick={() => setMore((m) => !m)}>
+          {more ? "Fewer choices" : "Filters and sort"}
+        </button>
+      </div>
+      {/* On a phone the selects fold away under one button; from md up they sit in the grid. */}
+      <div id="commission-more-filters" className={more ? "contents" : "hidden md:contents"}>
+        <LabelledSelect id="commission-stage" label="Stage" value={view.stage ?? ""} onChange={(v) => setView({ stage: v || null })}>
+          <option value="">Every stage</option>
+          {stages.map((s) => (
+            <option key={s.key} value={s.key}>
+              {s.label}
             </option>
           ))}
         </LabelledSelect>
-      ) : null}
-      {people ? (
-        <LabelledSelect id="commission-client" label="Client" value={view.client === null ? "" : String(view.client)} onChange={(v) => setView({ client: num(v) })}>
-          <option value="">Any client</option>
-          {people.clients.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
+        <LabelledSelect id="commission-overdue" label="Target date" value={view.overdue === null ? "" : String(view.overdue)} onChange={(v) => setView({ overdue: v === "" ? null : v === "true" })}>
+          <option value="">Any</option>
+          <option value="true">Overdue only</option>
+          <option value="false">Not overdue</option>
+        </LabelledSelect>
+        {people && showBuilderFilter ? (
+          <LabelledSelect id="commission-builder" label="Builder" value={view.builder === null ? "" : String(view.builder)} onChange={(v) => setView({ builder: v === "none" ? "none" : num(v) })}>
+            <option value="">Any builder</option>
+            <option value="none">Not assigned</option>
+            {people.builders.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </LabelledSelect>
+        ) : null}
+        {people ? (
+          <LabelledSelect id="commission-client" label="Client" value={view.client === null ? "" : String(view.client)} onChange={(v) => setView({ client: num(v) })}>
+            <option value="">Any client</option>
+            {people.clients.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </LabelledSelect>
+        ) : null}
+        <LabelledSelect id="commission-sort" label="Sort by" value={view.sort} onChange={(v) => setView({ sort: v as CommissionSort })}>
+          {COMMISSION_SORTS.map((s) => (
+            <option key={s} value={s}>
+              {SORT_LABELS[s]}
             </option>
           ))}
         </LabelledSelect>
-      ) : null}
-      <LabelledSelect id="commission-sort" label="Sort by" value={view.sort} onChange={(v) => setView({ sort: v as CommissionSort })}>
-        {COMMISSION_SORTS.map((s) => (
-          <option key={s} value={s}>
-            {SORT_LABELS[s]}
-          </option>
-        ))}
-      </LabelledSelect>
-      <LabelledSelect id="commission-page-size" label="Per page" value={String(view.pageSize)} onChange={(v) => setView({ pageSize: Number(v) })}>
-        {PAGE_SIZES.map((n) => (
-          <option key={n} value={n}>
-            {n}
-          </option>
-        ))}
-      </LabelledSelect>
+        <LabelledSelect id="commission-page-size" label="Per page" value={String(view.pageSize)} onChange={(v) => setView({ pageSize: Number(v) })}>
+          {PAGE_SIZES.map((n) => (
+            <option key={n} value={n}>
+              {n}
+            </option>
+          ))}
+        </LabelledSelect>
+      </div>
       {isFiltered(view) ? (
         <div className="flex items-end">
           <button

@@ -15,7 +15,8 @@ import { useCommissionChange } from "./use-commission-change";
 
 const KIND: Record<string, string> = { open: "Opened", advance: "Moved on", back: "Moved back", hold: "Put on hold", resume: "Resumed", cancel: "Cancelled", deliver: "Delivered" };
 
-export function StageTimeline({ slug, commissionId, canSignOff }: { slug: string; commissionId: number; canSignOff: boolean }) {
+/** `showSignoff`: mark moves that waited for the owner (the workshop's matter; a client only sees what they were told). */
+export function StageTimeline({ slug, commissionId, canSignOff, showSignoff }: { slug: string; commissionId: number; canSignOff: boolean; showSignoff: boolean }) {
   const history = useStageHistory(slug, commissionId);
   const signOff = useCommissionChange<number>(slug, (historyId) => ({ path: commissionPaths(slug).signoff(commissionId, historyId) }));
   if (history.isPending) return <Loading label="Loading the timeline…" />;
@@ -27,14 +28,14 @@ export function StageTimeline({ slug, commissionId, canSignOff }: { slug: string
       {signOff.isError ? <Alert tone="error">{errorMessage(signOff.error)}</Alert> : null}
       <ol aria-label="Timeline" className="space-y-3 border-l-2 border-spruce-200 pl-4">
         {entries.map((h) => (
-          <TimelineEntry key={h.id} h={h} canSignOff={canSignOff} busy={signOff.isPending && signOff.variables === h.id} onSignOff={() => signOff.mutate(h.id)} />
+          <TimelineEntry key={h.id} h={h} showSignoff={showSignoff} canSignOff={canSignOff} busy={signOff.isPending && signOff.variables === h.id} onSignOff={() => signOff.mutate(h.id)} />
         ))}
       </ol>
     </div>
   );
 }
 
-function TimelineEntry({ h, canSignOff, busy, onSignOff }: { h: StageHistoryEntry; canSignOff: boolean; busy: boolean; onSignOff: () => void }) {
+function TimelineEntry({ h, showSignoff, canSignOff, busy, onSignOff }: { h: StageHistoryEntry; showSignoff: boolean; canSignOff: boolean; busy: boolean; onSignOff: () => void }) {
   const pending = h.needsSignoff && !h.signedOffAt;
   return (
     <li className="relative">
@@ -47,7 +48,7 @@ function TimelineEntry({ h, canSignOff, busy, onSignOff }: { h: StageHistoryEntr
         {h.actor?.name ?? "The workshop"} · <time dateTime={h.createdAt}>{formatWhen(h.createdAt)}</time>
       </p>
       {h.note ? <p className="mt-1 whitespace-pre-wrap break-words rounded-chip bg-spruce-50 px-2 py-1 text-sm">{h.note}</p> : null}
-      {h.needsSignoff ? (
+      {h.needsSignoff && showSignoff ? (
         <div className="mt-1 flex flex-wrap items-center gap-2">
           {pending ? <Badge tone="warning">waiting for the owner&apos;s sign-off</Badge> : <Badge tone="success">signed off</Badge>}
           {pending && canSignOff ? (

@@ -2,7 +2,7 @@
 // instrument on a phone; the owner assigns a builder and sets the price; the builder drafts the
 // spec on a shop tablet with live figures and sends it; the client approves it, then approves a
 // second version seeing what changed; the deposit is recorded (offline, by the bookkeeper over the
-// API); the builder moves the build on with a note, the owner signs a move off; the client's stage
+// API), which starts the build; the builder moves it on with a note, the owner signs a move off; the client's stage
 // e-mails arrive in the fake inbox. Expected figures come from the same pure build-math module
 // that tests/unit/lutherie checks against its published sources.
 import { expect, test, type Browser, type Page } from "@playwright/test";
@@ -164,6 +164,7 @@ test("client request → spec with live figures → approval with diff → depos
   await builder.goto(`${base}/${id}`);
   await expect(builder.getByRole("button", { name: "Move to Timber selection" })).toBeDisabled();
   await expect(builder.getByText("The deposit has not been paid.")).toBeVisible();
+  // (Recording the deposit moves the commission on by itself: lib/data/payments.ts.)
   const ownerApi = await signIn(ws.owner);
   const detail = (await ownerApi.json<{ commission: CommissionDetail }>(`/api/workshops/${ws.slug}/commissions/${id}`)).body.commission;
   const bookkeeper = await signIn(ws.bookkeeper);
@@ -173,32 +174,36 @@ test("client request → spec with live figures → approval with diff → depos
   });
   expect(paid.status).toBe(201);
 
-  // 8. The builder moves the build on with a note; the client hears of it.
+  // 8. The recorded deposit starts the build; the builder moves it on with a note; the client hears of both.
   await builder.reload();
-  await builder.getByLabel("Note with the move (optional)").fill("Alder body blank and maple neck blank chosen.");
-  await builder.getByRole("button", { name: "Move to Timber selection" }).click();
-  await expect(builder.getByText("Move to Timber selection: done.")).toBeVisible();
+  const current = (page: Page) => page.getByRole("list", { name: "Stage line" }).locator("[aria-current=step]");
+  await expect(current(builder)).toHaveText(/Timber selection/);
   const timeline = builder.getByRole("list", { name: "Timeline" });
   await expect(timeline.getByRole("listitem").first()).toContainText("Deposit → Timber selection");
-  await expect(timeline.getByRole("listitem").first()).toContainText("Alder body blank and maple neck blank chosen.");
-  await expect(builder.getByRole("list", { name: "Stage line" }).locator("[aria-current=step]")).toHaveText(/Timber selection/);
-  await keepScreenshot(builder, "commission-overview-builder-tablet");
   await openEmail(client, ws.client.email, /Your build has started/);
+  await builder.getByLabel("Note with the move (optional)").fill("Alder body blank and maple neck blank chosen.");
+  await builder.getByRole("button", { name: "Move to Body and neck shaping" }).click();
+  await expect(builder.getByText("Move to Body and neck shaping: done.")).toBeVisible();
+  await expect(timeline.getByRole("listitem").first()).toContainText("Timber selection → Body and neck shaping");
+  await expect(timeline.getByRole("listitem").first()).toContainText("Alder body blank and maple neck blank chosen.");
+  await expect(current(builder)).toHaveText(/Body and neck shaping/);
+  await keepScreenshot(builder, "commission-overview-builder-tablet");
+  await openEmail(client, ws.client.email, /Body and neck shaping:/);
 
   // 9. With the owner's sign-off required, the next move waits for it before the client is told.
   await testDb()("workshops").where({ id: ws.id }).update({ require_stage_signoff: true });
   await builder.reload();
-  await builder.getByRole("button", { name: "Move to Body and neck shaping" }).click();
+  await builder.getByRole("button", { name: "Move to Fretboard and frets" }).click();
   await expect(builder.getByText("The client is told once the owner signs it off.")).toBeVisible();
   await client.goto(`${base}/${id}`);
-  await expect(client.getByRole("list", { name: "Stage line" }).locator("[aria-current=step]")).toHaveText(/Timber selection/);
+  await expect(current(client)).toHaveText(/Body and neck shaping/);
   await owner.goto(`${base}/${id}`);
   await expect(owner.getByText("waiting for the owner's sign-off")).toBeVisible();
   await owner.getByRole("button", { name: "Sign off and tell the client" }).click();
   await expect(owner.getByText("signed off", { exact: true })).toBeVisible();
-  await openEmail(client, ws.client.email, /Body and neck shaping:/);
+  await openEmail(client, ws.client.email, /Fretboard and frets:/);
   await client.goto(`${base}/${id}`);
-  await expect(client.getByRole("list", { name: "Stage line" }).locator("[aria-current=step]")).toHaveText(/Body and neck shaping/);
+  await expect(current(client)).toHaveText(/Fretboard and frets/);
   await expect(client.getByRole("list", { name: "Timeline" })).toContainText("Alder body blank and maple neck blank chosen.");
   await expectNoSidewaysScroll(client);
   await keepScreenshot(client, "commission-overview-client-phone");

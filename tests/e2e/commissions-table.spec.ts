@@ -6,7 +6,7 @@ import type { CommissionSummary } from "../../lib/schemas/commission-out";
 import { approveSpec, openCommission } from "../http/commission-helpers";
 import { addMember, createTestUser, createWorkshopWithMembers, uniqueEmail, type TestMember, type TestWorkshop } from "../http/fixtures";
 import { signIn } from "../http/session";
-import { closeTestDb } from "../setup/test-db";
+import { closeTestDb, testDb } from "../setup/test-db";
 import { keepScreenshot } from "./screenshot";
 import { signInInBrowser } from "./sign-in";
 
@@ -179,4 +179,44 @@ test("each role sees exactly what it should", async ({ browser }) => {
   expect((await client.goto(`/${ws.slug}/commissions/${notTheirs.id}`))?.status()).toBe(404);
   expect((await client.goto(`/${ws.slug}/commissions/${notTheirs.id}/spec`))?.status()).toBe(404);
   await expect(client.getByRole("heading", { name: "No such commission" })).toBeVisible();
+});
+
+test("moves that stop work ask first; the API's field errors land on the form's fields", async ({ browser }) => {
+  test.setTimeout(Math.max(180_000, test.info().timeout));
+  const target = made.find((c) => !inDeposit.includes(c.id) && c.builder !== null)!;
+  const owner = await open(browser, ws.owner, `/${ws.slug}/commissions/${target.id}`);
+  const stageBadge = owner.getByTestId("commission-header").locator("[data-stage]");
+
+  // Hold: a dialog first; keeping it as it is changes nothing.
+  await owner.getByRole("button", { name: "Put on hold" }).click();
+  const dialog = owner.getByRole("dialog");
+  await expect(dialog).toContainText("Work stops until someone resumes it");
+  await dialog.getByRole("button", { name: "Keep it as it is" }).click();
+  await expect(stageBadge).toHaveAttribute("data-stage", "spec");
+  await owner.getByLabel("Note with the move (optional)").fill("Waiting for the client's choice of top wood.");
+  await owner.getByRole("button", { name: "Put on hold" }).click();
+  await dialog.getByRole("button", { name: "Yes, go ahead" }).click();
+  await expect(stageBadge).toHaveAttribute("data-stage", "on_hold");
+  await expect(owner.getByRole("list", { name: "Timeline" }).getByRole("listitem").first()).toContainText("Waiting for the client's choice of top wood.");
+  // Resume returns it to where it was held.
+  await owner.getByRole("button", { name: "Resume at Spec" }).click();
+  await dialog.getByRole("button", { name: "Yes, go ahead" }).click();
+  await expect(stageBadge).toHaveAttribute("data-stage", "spec");
+  // Cancel says what it means, and can be kept.
+  await owner.getByRole("button", { name: "Cancel the commission" }).click();
+  await expect(dialog).toContainText("This cannot be undone");
+  await dialog.getByRole("button", { name: "Keep it as it is" }).click();
+  await expect(stageBadge).toHaveAttribute("data-stage", "spec");
+
+  // A client chosen in the form who is no longer a client by the time it is sent: the API's 422
+  // names the field, and the form shows it there.
+  const leaving = await addMember(ws.id, await createTestUser({ email: uniqueEmail("leaving"), name: `Leaving client ${Date.now()}` }), "client");
+  await owner.goto(`/${ws.slug}/commissions/new`);
+  await owner.getByLabel("Title").fill("Short-scale bass for a student");
+  await owner.getByLabel("Client", { exact: true }).selectOption({ label: leaving.name });
+  await testDb()("memberships").where({ id: leaving.membershipId }).update({ role: "builder" });
+  await owner.getByRole("button", { name: "Open the commission" }).click();
+  await expect(owner.locator("#new-client-error")).toHaveText("Not a client of this workshop.");
+  await expect(owner.getByLabel("Client", { exact: true })).toHaveAttribute("aria-invalid", "true");
+  await expect(owner).toHaveURL(new RegExp(`/${ws.slug}/commissions/new$`));
 });

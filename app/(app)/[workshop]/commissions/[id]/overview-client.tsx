@@ -11,6 +11,7 @@ import { Failed, Loading } from "@/components/commissions/query-states";
 import { StageLine } from "@/components/commissions/stage-line";
 import { StageMoves } from "@/components/commissions/stage-moves";
 import { StageTimeline } from "@/components/commissions/stage-timeline";
+import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -32,9 +33,18 @@ export function OverviewClient(props: OverviewProps) {
   if (detail.isPending) return <Loading label="Loading the commission…" rows={5} />;
   if (detail.isError) return <Failed what="The commission" error={detail.error} retry={() => detail.refetch()} />;
   const c = detail.data;
+  const awaitingApproval = props.isClient && c.latestSpecVersion?.submitted && !c.latestSpecVersion.approved;
   return (
     <div className="grid grid-cols-1 items-start gap-5 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div className="min-w-0 space-y-5">
+        {awaitingApproval ? (
+          <Alert tone="warning">
+            Version {c.latestSpecVersion!.version} of the spec is waiting for your approval.{" "}
+            <Link href={`/${slug}/commissions/${c.id}/spec`} className="font-semibold underline">
+              Review it
+            </Link>
+          </Alert>
+        ) : null}
         <Card>
           <CardHeader title="Stage" subtitle={props.isClient ? "Where your instrument is in the build" : "The workshop's stage line"} />
           <CardBody className="space-y-5">
@@ -45,7 +55,7 @@ export function OverviewClient(props: OverviewProps) {
         <Card>
           <CardHeader title="Timeline" subtitle="Newest first" />
           <CardBody>
-            <StageTimeline slug={slug} commissionId={id} canSignOff={props.canSignOff} />
+            <StageTimeline slug={slug} commissionId={id} canSignOff={props.canSignOff} showSignoff={!props.isClient} />
           </CardBody>
         </Card>
         <Card>

@@ -48,6 +48,8 @@ export function SpecClient(props: SpecClientProps) {
 
   return (
     <div className="space-y-5">
+      {/* The client's next step comes first. */}
+      {props.canApprove && latest ? <ClientApproval slug={slug} id={id} unit={props.unit} latestId={latest.id} /> : null}
       {versions.data.length === 0 ? (
         props.canDraft ? null : <Empty>{props.canApprove ? "The workshop has not sent you a spec yet. You will get an e-mail when it is ready." : "No spec has been sent to the client yet."}</Empty>
       ) : (
@@ -59,8 +61,6 @@ export function SpecClient(props: SpecClientProps) {
           </CardBody>
         </Card>
       )}
-
-      {props.canApprove && latest ? <ClientApproval slug={slug} id={id} unit={props.unit} latestId={latest.id} /> : null}
 
       {shownId !== null ? (
         shown.isPending ? (
