@@ -4,11 +4,11 @@ import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { cx } from "@/lib/ui/cx";
 
-/** The workshop's section links; the current one is marked for the eye and for screen readers. */
-export function WorkshopNav({ links }: { links: Array<{ href: string; label: string }> }) {
+/** The workshop's section links (or another named set, e.g. a commission's tabs); the current one is marked for the eye and for screen readers. */
+export function WorkshopNav({ links, label = "Workshop" }: { links: Array<{ href: string; label: string }>; label?: string }) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Workshop" className="-mb-px flex gap-1 overflow-x-auto pt-2">
+    <nav aria-label={label} className="-mb-px flex gap-1 overflow-x-auto pt-2">
       {links.map((l) => {
         const current = pathname === l.href;
         return (

@@ -2,13 +2,14 @@
 
 // The instrument spec as a form, on react-hook-form with the one zod schema. The parent owns the
 // form (useForm) so it can reset it (presets, unit switch) and read its values for live results.
+import { useMemo } from "react";
 import { useFieldArray, type UseFormReturn } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { CONSTRUCTIONS, type Construction, type InstrumentSpec } from "@/lib/schemas/instrument-spec";
-import { fieldId, InputField, NumberField, useFieldError } from "./spec-form-fields";
+import { CONSTRUCTIONS, type Construction, type InstrumentSpec, type SpecIssue } from "@/lib/schemas/instrument-spec";
+import { ComputedIssuesContext, fieldId, InputField, issuesByPath, NumberField, useFieldError } from "./spec-form-fields";
 
 export type SpecForm = UseFormReturn<InstrumentSpec>;
 
@@ -36,7 +37,17 @@ const CONSTANT_FIELDS: { name: keyof NonNullable<InstrumentSpec["constants"]>; l
   { name: "defaultCoreFraction", label: "Default core / gauge", hint: "0.45, from memory" },
 ];
 
-export function SpecFormFields({ form }: { form: SpecForm }) {
+/** `issues`: the computed result's errors and warnings, shown on the fields they concern. */
+export function SpecFormFields({ form, issues }: { form: SpecForm; issues?: readonly SpecIssue[] }) {
+  const byPath = useMemo(() => (issues ? issuesByPath(issues) : null), [issues]);
+  return (
+    <ComputedIssuesContext.Provider value={byPath}>
+      <SpecFields form={form} />
+    </ComputedIssuesContext.Provider>
+  );
+}
+
+function SpecFields({ form }: { form: SpecForm }) {
   const { register, control, watch } = form;
   const strings = useFieldArray({ control, name: "strings" });
   const pickups = useFieldArray({ control, name: "pickups" });

@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { QueryProvider } from "@/components/query-provider";
 import { Badge } from "@/components/ui/badge";
 import { WorkshopNav } from "@/components/workshop-nav";
 import { requireWorkshopPage } from "@/lib/auth/pages";
@@ -11,6 +12,8 @@ export default async function WorkshopLayout({ children, params }: { children: R
   const { workshop, membership, can } = await requireWorkshopPage(slug);
   const links = [
     { href: `/${workshop.slug}`, label: "Home" },
+    ...(can("commission.read") ? [{ href: `/${workshop.slug}/commissions`, label: "Commissions" }] : []),
+    ...(can("commission.advance") ? [{ href: `/${workshop.slug}/commissions/board`, label: "Board" }] : []),
     ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
     ...(can("setup.read") ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
     ...(can("overview.read") ? [{ href: `/${workshop.slug}/overview`, label: "Overview" }] : []),
@@ -27,7 +30,9 @@ export default async function WorkshopLayout({ children, params }: { children: R
         <Badge tone={membership.role === "owner" ? "primary" : "neutral"}>You: {ROLE_LABELS[membership.role]}</Badge>
       </div>
       <WorkshopNav links={links} />
-      <div className="pt-6">{children}</div>
+      <div className="pt-6">
+        <QueryProvider>{children}</QueryProvider>
+      </div>
     </div>
   );
 }

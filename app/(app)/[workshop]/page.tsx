@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { RecentCommissions } from "@/components/commissions/recent-commissions";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/permissions";
@@ -14,10 +15,13 @@ export async function generateMetadata({ params }: { params: Promise<{ workshop:
 // panels here; for now it shows the workshop's settings and who is in it.
 export default async function WorkshopHome({ params }: { params: Promise<{ workshop: string }> }) {
   const { workshop: slug } = await params;
-  const { workshop, scope, can, user } = await requireWorkshopPage(slug, "workshop.read");
+  const { workshop, scope, can, user, membership } = await requireWorkshopPage(slug, "workshop.read");
   const counts = can("member.names") ? await countMembersByRole(scope) : null;
   return (
     <div className="grid gap-4 md:grid-cols-2">
+      {can("commission.read") ? (
+        <RecentCommissions slug={workshop.slug} title={membership.role === "client" ? "Your commissions" : "Recent commissions"} canCreate={can("commission.create")} />
+      ) : null}
       <Card>
         <CardHeader title={`Welcome, ${user.name}`} subtitle="What this workshop works in" />
         <CardBody>

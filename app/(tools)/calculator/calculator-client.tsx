@@ -4,18 +4,18 @@
 // address bar so the link can be shared. Computation runs here in the browser with the same pure
 // code as POST /api/compute, so typing never waits on the network.
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useEffect, useMemo, useState } from "react";
-import { useForm, useWatch, type FieldPath } from "react-hook-form";
+import { useEffect, useState } from "react";
+import { useForm } from "react-hook-form";
 import { BuildResults } from "@/components/build-math/build-results";
 import { PresetPicker } from "@/components/build-math/preset-picker";
 import { SetupHelpers } from "@/components/build-math/setup-helpers";
 import { SpecFormFields } from "@/components/build-math/spec-form";
-import { fieldId } from "@/components/build-math/spec-form-fields";
+import { focusSpecField } from "@/components/build-math/spec-form-fields";
 import { UnitSwitch } from "@/components/build-math/unit-switch";
+import { useLiveResult } from "@/components/build-math/use-live-result";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { useToast } from "@/components/ui/toast";
-import { computeSpec } from "@/lib/lutherie/compute-spec";
 import { convertSpecUnits } from "@/lib/lutherie/spec-units";
 import { encodeSpec, SPEC_QUERY_PARAM } from "@/lib/lutherie/spec-url";
 import type { LengthUnit } from "@/lib/lutherie/units";
@@ -29,16 +29,12 @@ function withoutNaN<T>(value: T): T {
 export function CalculatorClient({ initialSpec, linkProblem }: { initialSpec: InstrumentSpec; linkProblem: boolean }) {
   const toast = useToast();
   const form = useForm<InstrumentSpec>({ resolver: zodResolver(instrumentSpecSchema), mode: "onChange", defaultValues: initialSpec });
-  const values = useWatch({ control: form.control });
-  const parsed = useMemo(() => instrumentSpecSchema.safeParse(values), [values]);
-  const result = useMemo(() => (parsed.success ? computeSpec(parsed.data) : null), [parsed]);
-  const [lastGood, setLastGood] = useState(() => computeSpec(initialSpec));
+  const { values, parsed, result, shown } = useLiveResult(form, initialSpec);
   const [shareUrl, setShareUrl] = useState("");
   const units = (values.units ?? initialSpec.units) as LengthUnit;
 
   useEffect(() => {
     if (!result || !parsed.success) return;
-    setLastGood(result);
     // Mirror the spec into the address bar, a moment after typing stops.
     const t = setTimeout(() => {
       const url = `${window.location.pathname}?${SPEC_QUERY_PARAM}=${encodeSpec(parsed.data)}`;
@@ -48,16 +44,9 @@ export function CalculatorClient({ initialSpec, linkProblem }: { initialSpec: In
     return () => clearTimeout(t);
   }, [result, parsed]);
 
-  const shown = result ?? lastGood;
-
   const switchUnits = (to: LengthUnit) => form.reset(convertSpecUnits(withoutNaN(form.getValues()), to));
 
-  const focusField = (path: string) => {
-    form.setFocus(path as FieldPath<InstrumentSpec>);
-    const el = document.getElementById(fieldId(path));
-    if (el && document.activeElement !== el) el.focus();
-    el?.scrollIntoView({ block: "center", behavior: "smooth" });
-  };
+  const focusField = (path: string) => focusSpecField(form, path);
 
   const copyLink = async () => {
     try {
