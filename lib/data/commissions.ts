@@ -5,10 +5,10 @@ import { AppError, forbidden } from "@/lib/http/errors";
 import { money, percentOf } from "@/lib/money/money";
 import type { CommissionCreate, CommissionListQuery, CommissionPatch } from "@/lib/schemas/commission";
 import type { CommissionPage, CommissionSummary } from "@/lib/schemas/commission-out";
-import { formatCommissionNumber } from "@/lib/workflow/commission-number";
 import { CANCELLED, DELIVERED, SPEC, stageLabel, stageLine, type BuildStage } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow, visibleCommissions, type CommissionRow } from "./commission-access";
+import { nextCommissionNumber } from "./commission-numbers";
 import { inTransaction, iso, type Trx } from "./transaction";
 import { getWorkshopSettings } from "./workshop-settings";
 
@@ -116,15 +116,6 @@ async function checkBuilder(trx: Trx, scope: WorkshopScope, builderId: number | 
   }
 }
 
-/** Takes the next number of the year for this workshop under a row lock. */
-async function nextNumber(trx: Trx, workshopId: number, year: number): Promise<string> {
-  await trx("commission_counters").insert({ workshop_id: workshopId, year, last_sequence: 0 }).onConflict(["workshop_id", "year"]).ignore();
-  const row = await trx("commission_counters").where({ workshop_id: workshopId, year }).forUpdate().first("last_sequence");
-  const next = Number(row.last_sequence) + 1;
-  await trx("commission_counters").where({ workshop_id: workshopId, year }).update({ last_sequence: next });
-  return formatCommissionNumber(year, next);
-}
-
 /**
  * Opens a commission in the spec stage. A client opens a request for themselves; the owner or a
  * builder opens one for a client of the workshop.
@@ -149,7 +140,7 @@ export async function createCommission(scope: WorkshopScope, input: CommissionCr
     const currency = scope.role === "owner" ? (input.currency ?? settings.currency) : settings.currency;
     const depositPercent = scope.role === "owner" ? (input.depositPercent ?? settings.depositPercent) : settings.depositPercent;
     const depositMinor = percentOf(money(priceMinor, currency), depositPercent).amountMinor;
-    const number = await nextNumber(trx, scope.workshopId, new Date().getUTCFullYear());
+    const number = await nextCommissionNumber(trx, scope.workshopId, new Date().getUTCFullYear());
     const [id] = await trx("commissions").insert({
       workshop_id: scope.workshopId,
       number,
