@@ -8,6 +8,7 @@ import type { InstrumentSpec } from "@/lib/schemas/instrument-spec";
 import { planTransition, type Actor, type GuardFacts, type TransitionAction } from "@/lib/workflow/machine";
 import { SPEC, stageLabel, type BuildStage } from "@/lib/workflow/stages";
 import { DEMO_DESIGNS } from "./commission-designs";
+import { seededRandom } from "./seeded-random";
 import { BUILD_TALK, CANCEL_NOTES, changeTalk, DELIVERY_TALK, HOLD_REASONS, NOTES_INTO, REQUEST_NOTES, SPEC_TALK, type Exchange } from "./commission-story";
 
 /** Where a demo commission stands today, and the path that led there. */
@@ -104,19 +105,6 @@ const DAY = 86_400_000;
 /** Demo workshops whose owner signs off each builder's stage before the client hears of it (a school). */
 export const DEMO_SIGNOFF_WORKSHOPS: readonly string[] = ["fernhollow"];
 
-/** A small seeded generator (mulberry32), so the demo is the same on every machine. */
-function random(seedText: string): () => number {
-  let a = 0;
-  for (const ch of seedText) a = (Math.imul(a ^ ch.charCodeAt(0), 2654435761) + 1) >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 const ALL_MET = { approvedSpec: { id: 1, hasErrors: false }, newerUnapprovedSpec: false, depositPaid: true, balancePaid: true, setupSheetSigned: true };
 
 /** Builds one workshop's demo commissions. `now` anchors every date (the story ends before it). */
@@ -132,7 +120,7 @@ export function demoCommissions(input: {
   const { template, cast } = input;
   const facts: GuardFacts = { ...ALL_MET, template, requireOwnerSignoff: input.requireOwnerSignoff };
   return DEMO_SITUATIONS.map((situation, i) => {
-    const rnd = random(`${input.slug}:${i}`);
+    const rnd = seededRandom(`${input.slug}:${i}`);
     const days = (min: number, max: number) => min + rnd() * (max - min);
     const design = DEMO_DESIGNS[(i * 5 + input.slug.length) % DEMO_DESIGNS.length]!;
     // Shifted every 12 so that no client gets the same design twice (titles stay unique).

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@/lib/auth/permissions";
 import { closeTestDb, testDb } from "../setup/test-db";
 import { createWorkshopWithMembers, uniqueEmail, type TestWorkshop } from "./fixtures";
+import { callRoute, itRefusesStrangers } from "./route-matrix";
 import { anonymous, signIn, type HttpSession } from "./session";
 
 let a: TestWorkshop;
@@ -52,29 +53,13 @@ const ROUTES: Route[] = [
   { name: "retry an e-mail", method: "POST", path: () => `/api/workshops/${a.slug}/outbox/${failedMessageId}/retry`, allowed: ["owner"], ok: 200 },
 ];
 
-async function call(who: Who, r: Route, path = r.path()) {
-  const body = r.body?.();
-  return as[who]!.fetch(path, { method: r.method, ...(body !== undefined ? { json: body } : {}) });
-}
+const call = (who: Who, r: Route) => callRoute(as[who]!, r);
+const strangers = { anonymous: () => as.anonymous!, outsider: () => as.outsider!, member: () => as.owner!, slug: () => a.slug };
 
 describe("member and invitation routes, role by role", () => {
   for (const r of ROUTES) {
     describe(`${r.method} ${r.name}`, () => {
-      it("answers 401 with the error body when signed out", async () => {
-        const res = await call("anonymous", r);
-        expect(res.status).toBe(401);
-        expect(await res.json()).toEqual({ error: { code: "unauthenticated", message: "Sign in to continue." } });
-      });
-
-      it("answers 404, as for a workshop that does not exist, to a member of another workshop", async () => {
-        const outsider = await call("outsider", r);
-        const unknown = await call("owner", r, r.path().replace(a.slug, "no-such-workshop-here"));
-        expect(outsider.status).toBe(404);
-        expect(unknown.status).toBe(404);
-        const [x, y] = [await outsider.json(), await unknown.json()];
-        expect(x).toEqual({ error: { code: "not_found", message: "No such workshop." } });
-        expect(y).toEqual(x);
-      });
+      itRefusesStrangers(r, strangers);
 
       for (const role of ["owner", "builder", "bookkeeper", "client"] as Role[]) {
         const permitted = r.allowed.includes(role);
