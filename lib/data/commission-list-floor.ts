@@ -11,7 +11,7 @@ const LINE = stageSortLine(DEFAULT_BUILD_STAGES);
 
 /** The owner's list query of `workshopId` (what visibleCommissions gives an owner), as raw rows. */
 export async function benchCommissionListFloor(workshopId: number, query: CommissionListQuery): Promise<{ total: number; rows: unknown[] }> {
-  const { count, rows } = commissionListQueries(db, db("commissions as c").where("c.workshop_id", workshopId), query, { stageColumn: "c.stage", line: LINE });
+  const { count, rows } = commissionListQueries(db, db("commissions as c").where("c.workshop_id", workshopId), query, { workshopId, stageColumn: "c.stage", line: LINE });
   const [counted, list] = await Promise.all([count, rows]);
   return { total: Number(counted?.n ?? 0), rows: list };
 }

@@ -11,7 +11,7 @@ import { writeAudit } from "./audit";
 import { getVisibleCommissionRow, visibleCommissions, type CommissionRow } from "./commission-access";
 import { nextCommissionNumber } from "./commission-numbers";
 import { inTransaction, iso, type Trx } from "./transaction";
-import { getWorkshopSettings } from "./workshop-settings";
+import { buildStagesColumn, buildStagesFrom, getWorkshopSettings } from "./workshop-settings";
 
 type Row = CommissionRow & { client_name: string; builder_name: string | null };
 
@@ -66,7 +66,8 @@ export function stageSortLine(template: readonly BuildStage[]): string[] {
 /**
  * The list's SQL on a base already narrowed to what the caller may see (`visibleCommissions`):
  * the filters, then the count and one sorted page. The benchmark's floor route runs exactly these.
- * `line` is only read by the stage sort.
+ * `line` is only read by the stage sort. The count also reads the workshop's stage template
+ * (`build_stages`), which the stage labels need, so that takes no statement of its own.
  *
  * The page is found on the commissions table alone (`p`: ids in order, from an index that matches
  * the sort) and only its rows are then joined to their people: joined from the start, the optimizer
@@ -76,7 +77,7 @@ export function commissionListQueries(
   knex: Knex | Trx,
   base: Knex.QueryBuilder,
   query: CommissionListQuery,
-  opts: { stageColumn: "c.stage" | "c.client_stage"; line: readonly string[] },
+  opts: { workshopId: number; stageColumn: "c.stage" | "c.client_stage"; line: readonly string[] },
 ) {
   if (query.stage) base.whereIn(opts.stageColumn, query.stage.split(",").filter(Boolean));
   if (query.builder === "none") base.whereNull("c.builder_user_id");
@@ -93,7 +94,7 @@ export function commissionListQueries(
     base.where((q) => q.where("c.title", "like", like).orWhere("c.number", "like", like));
   }
 
-  const count = base.clone().count({ n: "*" }).first();
+  const count = base.clone().count({ n: "*" }).select(buildStagesColumn(knex, opts.workshopId)).first();
   const desc = query.sort.startsWith("-");
   const key = query.sort.replace(/^-/, "") as keyof typeof SORT_COLUMNS | "stage";
   const dir = desc ? "desc" : "asc";
@@ -114,14 +115,13 @@ export function commissionListQueries(
 /** A page of the commissions the caller may see, filtered, searched and sorted. */
 export async function listCommissions(scope: WorkshopScope, query: CommissionListQuery): Promise<CommissionPage> {
   const stageColumn = scope.role === "client" ? "c.client_stage" : "c.stage";
-  const settingsRead = getWorkshopSettings(scope);
-  // The stage sort follows the workshop's own line, so it needs the settings first; for every other
-  // sort the settings (for the stage labels), the count and the page are read side by side.
-  const line = query.sort.endsWith("stage") ? stageSortLine((await settingsRead).buildStages) : [];
-  const { count, rows } = commissionListQueries(db, visibleCommissions(scope), query, { stageColumn, line });
-  const [settings, counted, list] = await Promise.all([settingsRead, count, rows]);
-  const total = Number(counted?.n ?? 0);
-  return { items: (list as Row[]).map((r) => toSummary(scope, r, settings.buildStages)), total, page: query.page, pageSize: query.pageSize };
+  // The stage sort follows the workshop's own line, so it reads the settings first; every other
+  // sort runs the count (which brings the template for the labels) and the page side by side.
+  const line = query.sort.endsWith("stage") ? stageSortLine((await getWorkshopSettings(scope)).buildStages) : [];
+  const { count, rows } = commissionListQueries(db, visibleCommissions(scope), query, { workshopId: scope.workshopId, stageColumn, line });
+  const [counted, list] = (await Promise.all([count, rows])) as [{ n: number; build_stages: unknown } | undefined, Row[]];
+  const template = buildStagesFrom(counted?.build_stages ?? null);
+  return { items: list.map((r) => toSummary(scope, r, template)), total: Number(counted?.n ?? 0), page: query.page, pageSize: query.pageSize };
 }
 
 /** One commission as the caller may see it (404 otherwise). */

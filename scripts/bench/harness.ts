@@ -77,9 +77,11 @@ export interface LoadResult {
   requests: number;
   non2xx: number;
   errors: number;
+  /** Every response time of the measured run, sorted (for merging runs). */
+  timesMs: number[];
 }
 
-function percentile(sorted: number[], p: number): number {
+export function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;
   const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
   return sorted[i]!;
@@ -122,6 +124,7 @@ export async function measure(o: LoadOptions): Promise<LoadResult> {
     requests: result.requests.total,
     non2xx: result.non2xx,
     errors: result.errors + result.timeouts,
+    timesMs: times,
   };
 }
 

@@ -147,13 +147,29 @@ describe("the list on 20,000 commissions", () => {
   }, 120_000);
 });
 
+describe("stage labels in the list", () => {
+  it("names each stage by the workshop's own template once the owner has stored one", async () => {
+    const renamed = DEFAULT_BUILD_STAGES.map((st) => ({ key: st.key, label: `Our ${st.label.toLowerCase()}` }));
+    await testDb()("workshops").where({ id: ws.id }).update({ build_stages: JSON.stringify(renamed) });
+    try {
+      for (const sort of ["-updated", "stage"]) {
+        const got = await page(owner, `stage=finish&sort=${sort}&pageSize=5`);
+        expect(got.items.map((i) => i.stageLabel)).toEqual(Array(5).fill("Our finishing"));
+      }
+    } finally {
+      await testDb()("workshops").where({ id: ws.id }).update({ build_stages: null });
+    }
+    expect((await page(owner, "stage=finish&pageSize=1")).items[0]!.stageLabel).toBe("Finishing");
+  });
+});
+
 describe("EXPLAIN of the list queries on 20,000 commissions", () => {
   type Plan = { table: string; type: string; key: string | null; Extra: string | null };
   async function explain(role: "owner" | "builder" | "client", userId: number, qs: string) {
     // A scope as the authorization helper would mint it for this member (tests only).
     const scope = { workshopId: ws.id, membershipId: 0, userId, role } as unknown as WorkshopScope;
     const query = commissionListQuerySchema.parse(Object.fromEntries(new URLSearchParams(qs)));
-    const q = commissionListQueries(testDb(), visibleCommissions(scope), query, { stageColumn: role === "client" ? "c.client_stage" : "c.stage", line });
+    const q = commissionListQueries(testDb(), visibleCommissions(scope), query, { workshopId: ws.id, stageColumn: role === "client" ? "c.client_stage" : "c.stage", line });
     const out: Record<"count" | "rows", Plan[]> = { count: [], rows: [] };
     for (const what of ["count", "rows"] as const) {
       const { sql, bindings } = q[what].toSQL();
