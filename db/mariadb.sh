@@ -86,9 +86,11 @@ init_datadir() {
 start_server() {
   local user_opt=(); [ "$(id -u)" -eq 0 ] && user_opt=(--user=root)
   log "starting mariadbd on 127.0.0.1:$PORT"
+  # Temporary tables in a folder of our own: /tmp is shared with other programs that may clean it.
+  mkdir -p "$DIR/tmp"
   # setsid: the server must outlive the shell that started it and not get the launcher's Ctrl-C.
   setsid "$(find_bin mariadbd)" --no-defaults "${user_opt[@]}" --datadir="$DATADIR" --socket="$SOCK" \
-    --port="$PORT" --bind-address=127.0.0.1 --pid-file="$PID" --log-error="$LOG" \
+    --port="$PORT" --bind-address=127.0.0.1 --pid-file="$PID" --log-error="$LOG" --tmpdir="$DIR/tmp" \
     --skip-name-resolve --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
     --default-storage-engine=InnoDB --max-connections=500 --innodb-buffer-pool-size=256M \
     --innodb-flush-log-at-trx-commit=1 </dev/null >/dev/null 2>&1 &

@@ -7,16 +7,14 @@
 // It starts MariaDB (db/mariadb.sh) when it is not running, builds into .next-bench (skip with
 // BENCH_SKIP_BUILD=1 once built), serves on BENCH_PORT (default APP_PORT + 200) and stops what it started.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { cpus, loadavg } from "node:os";
-import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import autocannon from "autocannon";
+import { cpuMs, loadText } from "./bench/harness";
 import { ROOT, loadEnv } from "./env.mjs";
 
 const env = loadEnv();
 const say = (s: string) => console.log(`[bench] ${s}`);
-// Other work on the machine moves these figures: print the load beside them.
-const load1 = () => `load ${loadavg()[0]!.toFixed(2)} on ${cpus().length} cores`;
+const load1 = loadText;
 
 async function inProcess() {
   const { computeSpec } = await import("../lib/lutherie/compute-spec");
@@ -73,16 +71,6 @@ async function stopServer(child: ChildProcess) {
   child.kill("SIGTERM");
   await Promise.race([gone, new Promise((r) => setTimeout(r, 5000))]);
   if (child.exitCode === null) child.kill("SIGKILL");
-}
-
-/** CPU time (user + system, ms) a process has used so far, from /proc (Linux). */
-function cpuMs(pid: number | undefined): number {
-  try {
-    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
-    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // clock ticks at USER_HZ = 100
-  } catch {
-    return Number.NaN;
-  }
 }
 
 function percentile(sorted: number[], p: number) {

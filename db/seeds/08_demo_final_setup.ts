@@ -3,7 +3,7 @@ import { computeSpec } from "../../lib/lutherie/compute-spec";
 import { presetById } from "../../lib/lutherie/presets";
 import { convertSpecUnits } from "../../lib/lutherie/spec-units";
 import { buildOptionsSchema } from "../../lib/schemas/build-options";
-import { formatCommissionNumber } from "../../lib/workflow/commission-number";
+import { nextCommissionNumber } from "../../lib/data/commission-numbers";
 import { DEFAULT_BUILD_STAGES, DEPOSIT, FINAL_SETUP, SPEC } from "../../lib/workflow/stages";
 
 // One invented commission per demo workshop waiting in final setup, so the demo builder can fill
@@ -27,17 +27,14 @@ export async function seed(knex: Knex): Promise<void> {
     if (!client || !builder) continue;
     await knex.transaction(async (trx) => {
       const year = new Date().getUTCFullYear();
-      await trx("commission_counters").insert({ workshop_id: ws.id, year, last_sequence: 0 }).onConflict(["workshop_id", "year"]).ignore();
-      const counter = await trx("commission_counters").where({ workshop_id: ws.id, year }).forUpdate().first("last_sequence");
-      const sequence = Number(counter.last_sequence) + 1;
-      await trx("commission_counters").where({ workshop_id: ws.id, year }).update({ last_sequence: sequence });
+      const number = await nextCommissionNumber(trx, ws.id, year);
 
       const start = Date.now() - 70 * DAY;
       const at = (days: number) => new Date(start + days * DAY);
       const deposit = Math.round(d.priceMinor * 0.3);
       const [commissionId] = await trx("commissions").insert({
         workshop_id: ws.id,
-        number: formatCommissionNumber(year, sequence),
+        number,
         client_user_id: client.id,
         builder_user_id: builder.id,
         title: d.title,

@@ -1,23 +1,24 @@
 // Commissions: list, read, open, change. Every query starts from visibleCommissions(scope).
+import type { Knex } from "knex";
 import { db } from "@/db/knex";
 import type { WorkshopScope } from "@/lib/auth/scope";
 import { AppError, forbidden } from "@/lib/http/errors";
 import { money, percentOf } from "@/lib/money/money";
 import type { CommissionCreate, CommissionListQuery, CommissionPatch } from "@/lib/schemas/commission";
 import type { CommissionPage, CommissionSummary } from "@/lib/schemas/commission-out";
-import { formatCommissionNumber } from "@/lib/workflow/commission-number";
-import { CANCELLED, DELIVERED, SPEC, stageLabel, stageLine, type BuildStage } from "@/lib/workflow/stages";
+import { CANCELLED, DELIVERED, ON_HOLD, SPEC, stageLabel, stageLine, type BuildStage } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
 import { checkCohortOfWorkshop } from "./cohorts";
 import { getVisibleCommissionRow, visibleCommissions, type CommissionRow } from "./commission-access";
+import { nextCommissionNumber } from "./commission-numbers";
 import { inTransaction, iso, type Trx } from "./transaction";
-import { getWorkshopSettings } from "./workshop-settings";
+import { buildStagesColumn, buildStagesFrom, getWorkshopSettings } from "./workshop-settings";
 
 type Row = CommissionRow & { client_name: string; builder_name: string | null };
 
 const SELECT = ["c.*", "cu.name as client_name", "bu.name as builder_name"];
 
-function withPeople(q: ReturnType<typeof visibleCommissions>) {
+function withPeople(q: Knex.QueryBuilder) {
   return q.join("users as cu", "cu.id", "c.client_user_id").leftJoin("users as bu", "bu.id", "c.builder_user_id");
 }
 
@@ -58,18 +59,35 @@ const SORT_COLUMNS = {
   updated: "c.updated_at",
 } as const;
 
-/** A page of the commissions the caller may see, filtered, searched and sorted. */
-export async function listCommissions(scope: WorkshopScope, query: CommissionListQuery): Promise<CommissionPage> {
-  const settings = await getWorkshopSettings(scope);
-  const stageColumn = scope.role === "client" ? "c.client_stage" : "c.stage";
-  const base = visibleCommissions(scope);
-  if (query.stage) base.whereIn(stageColumn, query.stage.split(",").filter(Boolean));
+/** The order the stage sort follows: the workshop's own line, then the side states. */
+export function stageSortLine(template: readonly BuildStage[]): string[] {
+  return [...stageLine(template), ON_HOLD, CANCELLED];
+}
+
+/**
+ * The list's SQL on a base already narrowed to what the caller may see (`visibleCommissions`):
+ * the filters, then the count and one sorted page. The benchmark's floor route runs exactly these.
+ * `line` is only read by the stage sort. The count also reads the workshop's stage template
+ * (`build_stages`), which the stage labels need, so that takes no statement of its own.
+ *
+ * The page is found on the commissions table alone (`p`: ids in order, from an index that matches
+ * the sort) and only its rows are then joined to their people: joined from the start, the optimizer
+ * may drive the query from the small users table and sort every commission of the workshop.
+ */
+export function commissionListQueries(
+  knex: Knex | Trx,
+  base: Knex.QueryBuilder,
+  query: CommissionListQuery,
+  opts: { workshopId: number; stageColumn: "c.stage" | "c.client_stage"; line: readonly string[] },
+) {
+  if (query.stage) base.whereIn(opts.stageColumn, query.stage.split(",").filter(Boolean));
   if (query.builder === "none") base.whereNull("c.builder_user_id");
   else if (query.builder !== undefined) base.where("c.builder_user_id", query.builder);
   if (query.client !== undefined) base.where("c.client_user_id", query.client);
   if (query.cohort !== undefined) base.where("c.cohort_id", query.cohort);
   if (query.overdue !== undefined) {
-    const overdue = (q: typeof base) => q.whereNotNull("c.target_date").where("c.target_date", "<", todayUtc()).whereNotIn("c.stage", [DELIVERED, CANCELLED]);
+    const today = todayUtc();
+    const overdue = (q: Knex.QueryBuilder) => q.whereNotNull("c.target_date").where("c.target_date", "<", today).whereNotIn("c.stage", [DELIVERED, CANCELLED]);
     if (query.overdue) overdue(base);
     else base.whereNot((q) => void overdue(q));
   }
@@ -78,22 +96,34 @@ export async function listCommissions(scope: WorkshopScope, query: CommissionLis
     base.where((q) => q.where("c.title", "like", like).orWhere("c.number", "like", like));
   }
 
-  const countRow = await base.clone().count({ n: "*" }).first();
-  const total = Number(countRow?.n ?? 0);
-
+  const count = base.clone().count({ n: "*" }).select(buildStagesColumn(knex, opts.workshopId)).first();
   const desc = query.sort.startsWith("-");
   const key = query.sort.replace(/^-/, "") as keyof typeof SORT_COLUMNS | "stage";
-  const rowsQ = withPeople(base).select(SELECT);
-  if (key === "stage") {
-    // Stage order is the workshop's own line, not the alphabet.
-    const line = [...stageLine(settings.buildStages), "on_hold", "cancelled"];
-    rowsQ.orderByRaw(desc ? "FIND_IN_SET(??, ?) DESC" : "FIND_IN_SET(??, ?) ASC", [stageColumn, line.join(",")]);
-  } else {
-    rowsQ.orderBy(SORT_COLUMNS[key], desc ? "desc" : "asc");
-  }
-  rowsQ.orderBy("c.id", desc ? "desc" : "asc");
-  const rows = (await rowsQ.limit(query.pageSize).offset((query.page - 1) * query.pageSize)) as Row[];
-  return { items: rows.map((r) => toSummary(scope, r, settings.buildStages)), total, page: query.page, pageSize: query.pageSize };
+  const dir = desc ? "desc" : "asc";
+  // Ties are broken by a unique key the sort's index already holds: the number for the title sort
+  // (numbers are unique within a workshop, and need no tie-breaker of their own), else the id.
+  const order = (q: Knex.QueryBuilder) => {
+    if (key === "stage") q.orderByRaw(desc ? "FIND_IN_SET(??, ?) DESC" : "FIND_IN_SET(??, ?) ASC", [opts.stageColumn, opts.line.join(",")]);
+    else q.orderBy(SORT_COLUMNS[key], dir);
+    if (key === "title") q.orderBy("c.number", dir);
+    else if (key !== "number") q.orderBy("c.id", dir);
+    return q;
+  };
+  const page = order(base.clone().select("c.id")).limit(query.pageSize).offset((query.page - 1) * query.pageSize);
+  const rows = order(withPeople(knex.from(page.as("p")).join("commissions as c", "c.id", "p.id")).select(SELECT));
+  return { count, rows };
+}
+
+/** A page of the commissions the caller may see, filtered, searched and sorted. */
+export async function listCommissions(scope: WorkshopScope, query: CommissionListQuery): Promise<CommissionPage> {
+  const stageColumn = scope.role === "client" ? "c.client_stage" : "c.stage";
+  // The stage sort follows the workshop's own line, so it reads the settings first; every other
+  // sort runs the count (which brings the template for the labels) and the page side by side.
+  const line = query.sort.endsWith("stage") ? stageSortLine((await getWorkshopSettings(scope)).buildStages) : [];
+  const { count, rows } = commissionListQueries(db, visibleCommissions(scope), query, { workshopId: scope.workshopId, stageColumn, line });
+  const [counted, list] = (await Promise.all([count, rows])) as [{ n: number; build_stages: unknown } | undefined, Row[]];
+  const template = buildStagesFrom(counted?.build_stages ?? null);
+  return { items: list.map((r) => toSummary(scope, r, template)), total: Number(counted?.n ?? 0), page: query.page, pageSize: query.pageSize };
 }
 
 /** One commission as the caller may see it (404 otherwise). */
@@ -116,19 +146,6 @@ async function checkBuilder(trx: Trx, scope: WorkshopScope, builderId: number | 
   if (role !== "builder" && role !== "owner") {
     throw new AppError("validation_failed", "Choose a builder of this workshop.", [{ path: "builderId", message: "Not a builder of this workshop." }]);
   }
-}
-
-/**
- * Takes the next number of the year for this workshop in one statement: the upsert locks the
- * counter row until the transaction ends, so concurrent openings queue instead of deadlocking.
- */
-async function nextNumber(trx: Trx, workshopId: number, year: number): Promise<string> {
-  const [res] = (await trx.raw(
-    `INSERT INTO commission_counters (workshop_id, year, last_sequence) VALUES (?, ?, LAST_INSERT_ID(1))
-     ON DUPLICATE KEY UPDATE last_sequence = LAST_INSERT_ID(last_sequence + 1)`,
-    [workshopId, year],
-  )) as [{ insertId: number }];
-  return formatCommissionNumber(year, Number(res.insertId));
 }
 
 /**
@@ -155,7 +172,7 @@ export async function createCommission(scope: WorkshopScope, input: CommissionCr
     const currency = scope.role === "owner" ? (input.currency ?? settings.currency) : settings.currency;
     const depositPercent = scope.role === "owner" ? (input.depositPercent ?? settings.depositPercent) : settings.depositPercent;
     const depositMinor = percentOf(money(priceMinor, currency), depositPercent).amountMinor;
-    const number = await nextNumber(trx, scope.workshopId, new Date().getUTCFullYear());
+    const number = await nextCommissionNumber(trx, scope.workshopId, new Date().getUTCFullYear());
     const [id] = await trx("commissions").insert({
       workshop_id: scope.workshopId,
       number,

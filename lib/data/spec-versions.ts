@@ -2,7 +2,6 @@
 // sent to the client, approved (which locks it). A change after approval is a new version.
 import type { WorkshopScope } from "@/lib/auth/scope";
 import { AppError, forbidden, notFound } from "@/lib/http/errors";
-import { computeSpec } from "@/lib/lutherie/compute-spec";
 import type { BuildOptions } from "@/lib/schemas/build-options";
 import type { ComputeResult, InstrumentSpec } from "@/lib/schemas/instrument-spec";
 import type { SpecVersionDetail, SpecVersionSummary } from "@/lib/schemas/spec-version";
@@ -11,6 +10,7 @@ import { summariseSpecChange } from "@/lib/workflow/spec-diff";
 import { CANCELLED, DELIVERED, SPEC } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow, type CommissionRow } from "./commission-access";
+import { specVersionColumns } from "./spec-version-columns";
 import { actorFor, applyTransition, emailClient, loadGuardFacts } from "./stage-transitions";
 import { inTransaction, iso, type Trx } from "./transaction";
 import { getWorkshopSettings } from "./workshop-settings";
@@ -68,18 +68,13 @@ export async function createSpecVersion(scope: WorkshopScope, commissionId: numb
   return inTransaction(async (trx) => {
     const row = await getVisibleCommissionRow(scope, commissionId, { trx, forUpdate: true });
     if (!isOpen(row)) throw new AppError("conflict", "The commission is closed; its spec cannot change any more.");
-    const result = computeSpec(input.spec);
     const last = await trx("spec_versions").where({ workshop_id: scope.workshopId, commission_id: commissionId }).max({ v: "version" }).first();
     const version = Number(last?.v ?? 0) + 1;
     const [id] = await trx("spec_versions").insert({
       workshop_id: scope.workshopId,
       commission_id: commissionId,
       version,
-      spec: JSON.stringify(input.spec),
-      options: JSON.stringify(input.options),
-      result: JSON.stringify(result),
-      has_errors: result.issues.some((i) => i.level === "error"),
-      total_tension_n: result.totals.tensionN,
+      ...specVersionColumns(input.spec, input.options),
       created_by: scope.userId,
     });
     await trx("commissions").where({ id: commissionId, workshop_id: scope.workshopId }).update({ updated_at: trx.fn.now(3) });

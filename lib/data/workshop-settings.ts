@@ -1,5 +1,6 @@
 // A workshop's working settings: name, units, currency, deposit percentage, build-stage template,
 // sign-off rule, e-mail sender name, logo. Read by every commission function; changed by the owner.
+import type { Knex } from "knex";
 import { db } from "@/db/knex";
 import { can } from "@/lib/auth/permissions";
 import type { WorkshopScope } from "@/lib/auth/scope";
@@ -25,6 +26,17 @@ export interface WorkshopSettings {
   logoFileKey: string | null;
 }
 
+/** A workshop's build-stage template from its stored column (JSON, as text or parsed); the default when never edited. */
+export function buildStagesFrom(raw: unknown): BuildStage[] {
+  const value = typeof raw === "string" ? (JSON.parse(raw) as unknown) : raw;
+  return Array.isArray(value) ? (value as BuildStage[]) : DEFAULT_BUILD_STAGES;
+}
+
+/** The stored template of one workshop as a scalar subquery, for a query that reads it alongside (`build_stages`). */
+export function buildStagesColumn(knex: Knex | Trx, workshopId: number): Knex.Raw {
+  return knex.raw("(SELECT w.build_stages FROM workshops AS w WHERE w.id = ?) AS build_stages", [workshopId]);
+}
+
 export async function getWorkshopSettings(scope: WorkshopScope, trx?: Trx): Promise<WorkshopSettings> {
   const row = await (trx ?? db)("workshops").where({ id: scope.workshopId }).first();
   return {
@@ -35,7 +47,7 @@ export async function getWorkshopSettings(scope: WorkshopScope, trx?: Trx): Prom
     currency: row.currency,
     depositPercent: Number(row.deposit_percent),
     // A workshop that never edited its template works to the default one.
-    buildStages: (row.build_stages as BuildStage[] | null) ?? DEFAULT_BUILD_STAGES,
+    buildStages: buildStagesFrom(row.build_stages),
     requireStageSignoff: !!row.require_stage_signoff,
     emailSenderName: row.email_sender_name,
     setupRanges: row.setup_ranges,

@@ -2,13 +2,16 @@
 // `next start` on a bench port (test database), autocannon runs with exact percentiles, and one
 // table format. Benchmarks print numbers; they never pass or fail on speed.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { readFileSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
 import { join } from "node:path";
 import autocannon from "autocannon";
 import { ROOT, loadEnv } from "../env.mjs";
 
 loadEnv();
 
-export const BENCH_PORT = Number(process.env.BENCH_APP_PORT ?? 3900);
+// Each checkout has its own APP_PORT; the bench serves beside it (BENCH_APP_PORT is the older name).
+export const BENCH_PORT = Number(process.env.BENCH_PORT ?? process.env.BENCH_APP_PORT ?? Number(process.env.APP_PORT ?? 3000) + 200);
 export const BENCH_URL = `http://localhost:${BENCH_PORT}`;
 
 function must(cmd: string, args: string[], env: NodeJS.ProcessEnv, label: string) {
@@ -24,6 +27,8 @@ export function prepareDatabase(): void {
 
 export interface RunningApp {
   url: string;
+  /** The `next start` process, for reading its CPU time. */
+  pid: number | undefined;
   stop: () => Promise<void>;
 }
 
@@ -54,6 +59,7 @@ export async function startApp(extraEnv: Record<string, string> = {}): Promise<R
   }
   return {
     url: BENCH_URL,
+    pid: child.pid,
     stop: () =>
       new Promise((resolve) => {
         child.once("exit", () => resolve());
@@ -71,9 +77,11 @@ export interface LoadResult {
   requests: number;
   non2xx: number;
   errors: number;
+  /** Every response time of the measured run, sorted (for merging runs). */
+  timesMs: number[];
 }
 
-function percentile(sorted: number[], p: number): number {
+export function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;
   const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
   return sorted[i]!;
@@ -87,6 +95,8 @@ export interface LoadOptions {
   method?: "GET" | "POST";
   headers?: Record<string, string>;
   body?: string;
+  /** Called between the warm-up and the measured run (e.g. to read counters). */
+  afterWarmUp?: () => Promise<void> | void;
   /** A fresh request per call (for bodies that must differ, e.g. webhook event ids). */
   setupRequest?: (req: { method?: string; path?: string; headers?: Record<string, string>; body?: string | Buffer }) => typeof req;
 }
@@ -95,6 +105,7 @@ export interface LoadOptions {
 export async function measure(o: LoadOptions): Promise<LoadResult> {
   const base = { url: o.url, connections: o.connections, method: o.method ?? "GET", headers: o.headers, body: o.body };
   await autocannon({ ...base, duration: 2, requests: o.setupRequest ? [{ setupRequest: o.setupRequest }] : undefined });
+  await o.afterWarmUp?.();
   const times: number[] = [];
   const instance = autocannon({
     ...base,
@@ -113,6 +124,7 @@ export async function measure(o: LoadOptions): Promise<LoadResult> {
     requests: result.requests.total,
     non2xx: result.non2xx,
     errors: result.errors + result.timeouts,
+    timesMs: times,
   };
 }
 
@@ -134,4 +146,17 @@ export function printTable(rows: Array<LoadResult & { floor?: LoadResult; target
   const out = [line(header), `|${widths.map((w) => "-".repeat(w + 2)).join("|")}|`, ...body.map(line)].join("\n");
   console.log(out);
   return out;
+}
+
+/** Other work on the machine moves the figures: the load to print beside them. */
+export const loadText = () => `load ${loadavg()[0]!.toFixed(2)} on ${cpus().length} cores`;
+
+/** CPU time (user + system, ms) a process has used so far, from /proc (Linux). */
+export function cpuMs(pid: number | undefined): number {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // clock ticks at USER_HZ = 100
+  } catch {
+    return Number.NaN;
+  }
 }

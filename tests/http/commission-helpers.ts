@@ -4,9 +4,15 @@ import type { CommissionDetail, CommissionSummary } from "@/lib/schemas/commissi
 import type { SpecVersionSummary } from "@/lib/schemas/spec-version";
 import { testDb } from "../setup/test-db";
 import type { TestWorkshop } from "./fixtures";
-import type { HttpSession } from "./session";
+import { signIn, type HttpSession } from "./session";
 
 export const base = (ws: TestWorkshop) => `/api/workshops/${ws.slug}/commissions`;
+
+/** Signs in the workshop's first owner, builder, bookkeeper and client. */
+export async function signInRoles(ws: TestWorkshop): Promise<{ owner: HttpSession; builder: HttpSession; bookkeeper: HttpSession; client: HttpSession }> {
+  const [owner, builder, bookkeeper, client] = await Promise.all([signIn(ws.owner), signIn(ws.builder), signIn(ws.bookkeeper), signIn(ws.client)]);
+  return { owner, builder, bookkeeper, client };
+}
 
 export function sixStringSpec() {
   return structuredClone(presetById("six").spec);

@@ -3,16 +3,16 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_BUILD_STAGES } from "@/lib/workflow/stages";
 import { testDb } from "../setup/test-db";
-import { approveSpec, base, detail, draftSpec, move, openCommission, outboxTemplatesFor, sixStringSpec } from "./commission-helpers";
+import { approveSpec, base, detail, draftSpec, move, openCommission, outboxTemplatesFor, signInRoles, sixStringSpec } from "./commission-helpers";
 import { createWorkshopWithMembers, type TestWorkshop } from "./fixtures";
-import { signIn, type HttpSession } from "./session";
+import type { HttpSession } from "./session";
 
 let ws: TestWorkshop;
 let owner: HttpSession, builder: HttpSession, bookkeeper: HttpSession, client: HttpSession;
 
 beforeAll(async () => {
   ws = await createWorkshopWithMembers();
-  [owner, builder, bookkeeper, client] = await Promise.all([signIn(ws.owner), signIn(ws.builder), signIn(ws.bookkeeper), signIn(ws.client)]);
+  ({ owner, builder, bookkeeper, client } = await signInRoles(ws));
 });
 
 describe("commission workflow", () => {

@@ -2,6 +2,7 @@
 // issue: B's ids used under A's slug are 404 and B's rows stay as they were.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "../setup/test-db";
+import { base, draftSpec, openCommission, sixStringSpec } from "./commission-helpers";
 import { addMember, createTestUser, createWorkshopWithMembers, uniqueEmail, type TestWorkshop } from "./fixtures";
 import { linkIn, waitForEmail } from "./inbox";
 import { signIn, type HttpSession } from "./session";
@@ -122,5 +123,88 @@ describe("cross-workshop isolation", () => {
     expect(taken.body.error.issues.map((i) => i.path)).toEqual(["slug"]);
     // B's owner did not become a member of it by trying.
     expect((await ownerB.fetch(`/api/workshops/${slug}/members`)).status).toBe(404);
+  });
+});
+
+// The commission routes: B's commission, its versions, history and comments are out of reach from
+// A, by id under A's address (404, as for no such commission) and under B's address (404, as for
+// no such workshop), and stay exactly as they were.
+describe("cross-workshop isolation of commissions", () => {
+  let cB: number;
+  let vB: number;
+  let hB: number;
+  const bState = async () => ({
+    commission: await testDb()("commissions").where({ id: cB }).first("title", "stage", "price_minor", "builder_user_id", "updated_at"),
+    versions: await testDb()("spec_versions").where({ commission_id: cB }).select("id", "submitted_at", "approved_at"),
+    comments: await testDb()("commission_comments").where({ commission_id: cB }).count({ n: "*" }).first(),
+    payments: await testDb()("payments").where({ commission_id: cB }).count({ n: "*" }).first(),
+    history: await testDb()("stage_history").where({ commission_id: cB }).select("id", "signed_off_at"),
+  });
+
+  beforeAll(async () => {
+    cB = (await openCommission(ownerB, b, { title: "B's own commission" })).id;
+    vB = (await draftSpec(ownerB, b, cB)).id;
+    hB = Number((await testDb()("stage_history").where({ commission_id: cB }).first("id")).id);
+    await ownerB.fetch(`${base(b)}/${cB}/comments`, { json: { body: "B's private note" } });
+  });
+
+  it("never lists B's commissions under A", async () => {
+    const list = await ownerA.json<{ items: Array<{ id: number }>; total: number }>(`${base(a)}?pageSize=200`);
+    expect(list.status).toBe(200);
+    expect(list.body.items.map((i) => i.id)).not.toContain(cB);
+    expect((await ownerA.json<{ items: unknown[] }>(`${base(a)}?q=${encodeURIComponent("B's own")}`)).body.items).toEqual([]);
+  });
+
+  it("answers B's commission ids under A's address with 404 on every route, and changes nothing", async () => {
+    const before = await bState();
+    const paths: Array<[string, string, unknown?]> = [
+      ["GET", `${base(a)}/${cB}`],
+      ["PATCH", `${base(a)}/${cB}`, { title: "Taken over" }],
+      ["GET", `${base(a)}/${cB}/transitions`],
+      ["POST", `${base(a)}/${cB}/transitions`, { action: "cancel" }],
+      ["POST", `${base(a)}/${cB}/transitions/${hB}/signoff`],
+      ["GET", `${base(a)}/${cB}/spec-versions`],
+      ["POST", `${base(a)}/${cB}/spec-versions`, { spec: sixStringSpec(), options: {} }],
+      ["GET", `${base(a)}/${cB}/spec-versions/${vB}`],
+      ["POST", `${base(a)}/${cB}/spec-versions/${vB}/submit`, {}],
+      ["GET", `${base(a)}/${cB}/comments`],
+      ["POST", `${base(a)}/${cB}/comments`, { body: "Hello from A" }],
+      ["POST", `${base(a)}/${cB}/payments`, { kind: "deposit", amountMinor: 1000, reference: "From A" }],
+    ];
+    for (const [method, path, json] of paths) {
+      const res = await ownerA.fetch(path, { method, ...(json !== undefined ? { json } : {}) });
+      expect(res.status, `${method} ${path}`).toBe(404);
+      expect(await res.json()).toEqual(notFound);
+    }
+    expect(await bState()).toEqual(before);
+  });
+
+  it("answers every commission route of B with the same 404 as a workshop that does not exist", async () => {
+    const before = await bState();
+    const paths: Array<[string, string, unknown?]> = [
+      ["GET", base(b)],
+      ["POST", base(b), { title: "Sneaked in", clientId: b.client.userId }],
+      ["GET", `${base(b)}/${cB}`],
+      ["PATCH", `${base(b)}/${cB}`, { title: "Taken over" }],
+      ["GET", `${base(b)}/${cB}/transitions`],
+      ["POST", `${base(b)}/${cB}/transitions`, { action: "cancel" }],
+      ["POST", `${base(b)}/${cB}/transitions/${hB}/signoff`],
+      ["GET", `${base(b)}/${cB}/spec-versions`],
+      ["POST", `${base(b)}/${cB}/spec-versions`, { spec: sixStringSpec(), options: {} }],
+      ["GET", `${base(b)}/${cB}/spec-versions/${vB}`],
+      ["POST", `${base(b)}/${cB}/spec-versions/${vB}/submit`, {}],
+      ["POST", `${base(b)}/${cB}/spec-versions/${vB}/approve`],
+      ["GET", `${base(b)}/${cB}/comments`],
+      ["POST", `${base(b)}/${cB}/comments`, { body: "Hello from A" }],
+      ["POST", `${base(b)}/${cB}/payments`, { kind: "deposit", amountMinor: 1000, reference: "From A" }],
+      ["GET", `/api/workshops/${b.slug}/commission-people`],
+    ];
+    for (const [method, path, json] of paths) {
+      const res = await ownerA.fetch(path, { method, ...(json !== undefined ? { json } : {}) });
+      expect(res.status, `${method} ${path}`).toBe(404);
+      expect(await res.json()).toEqual({ error: { code: "not_found", message: "No such workshop." } });
+    }
+    expect(await bState()).toEqual(before);
+    expect(await testDb()("commissions").where({ workshop_id: b.id }).count({ n: "*" }).first()).toEqual({ n: 1 });
   });
 });

@@ -4,7 +4,7 @@
 // product's own (no outside source).
 import type { Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEMO_COHORT } from "../../lib/demo/commissions";
+import { DEMO_COHORT } from "../../lib/demo/overview";
 import { createScratchDatabase } from "../setup/db";
 
 let knex: Knex;

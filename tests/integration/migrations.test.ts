@@ -27,7 +27,7 @@ describe("migrations", () => {
 
     await knex.migrate.latest();
     expect(await tables()).toEqual(first);
-  });
+  }, 120_000); // every migration's DDL twice: slow on a busy machine
 
   it("create InnoDB utf8mb4 tables", async () => {
     const [rows] = await knex.raw(

@@ -1,28 +1,17 @@
 // The commission stage machine: every legal and illegal move. The rules are the product's own
 // (what a workshop expects: no build before the deposit, no delivery before setup and balance).
 import { describe, expect, it } from "vitest";
-import { availableTransitions, planTransition, type Actor, type GuardFacts, type TransitionKind } from "@/lib/workflow/machine";
+import { availableTransitions, planTransition, type TransitionKind } from "@/lib/workflow/machine";
 import { CANCELLED, DEFAULT_BUILD_STAGES, DELIVERED, DEPOSIT, FINAL_SETUP, ON_HOLD, SPEC, stageLine, templateProblems } from "@/lib/workflow/stages";
+import { ACTORS, ALL_MET } from "./machine-fixtures";
 
 const template = DEFAULT_BUILD_STAGES;
 const line = stageLine(template);
 const firstBuild = template[0]!.key;
 const lastBuild = template[template.length - 1]!.key;
 
-const allMet: GuardFacts = {
-  template,
-  approvedSpec: { id: 1, hasErrors: false },
-  newerUnapprovedSpec: false,
-  depositPaid: true,
-  balancePaid: true,
-  setupSheetSigned: true,
-  requireOwnerSignoff: false,
-};
-const owner: Actor = { role: "owner", isAssignedBuilder: false, isCommissionClient: false };
-const builder: Actor = { role: "builder", isAssignedBuilder: true, isCommissionClient: false };
-const otherBuilder: Actor = { role: "builder", isAssignedBuilder: false, isCommissionClient: false };
-const bookkeeper: Actor = { role: "bookkeeper", isAssignedBuilder: false, isCommissionClient: false };
-const client: Actor = { role: "client", isAssignedBuilder: false, isCommissionClient: true };
+const allMet = ALL_MET;
+const { owner, assignedBuilder: builder, otherBuilder, bookkeeper, ownClient: client } = ACTORS;
 
 const at = (stage: string, heldFrom: string | null = null) => ({ stage, heldFrom });
 
