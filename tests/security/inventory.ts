@@ -23,6 +23,13 @@ export interface FoundRoute {
   reads: { body: SchemaRef | null; query: SchemaRef | null };
   /** The authorising wrapper the handler is made with (lib/auth/route-handlers.ts), if any. */
   wrapper: "withWorkshop" | "withUser" | null;
+  /**
+   * Made by a library (`export const { GET, POST } = handlers`, `createRouteHandler(…)`): what it
+   * reads cannot be seen from here, so it is taken to read both its body and its query.
+   */
+  library: boolean;
+  /** Reads the request itself (`req.text()`, `req.arrayBuffer()`, `req.json()`, `req.formData()`, the URL's query). */
+  readsRaw: boolean;
 }
 
 export interface FoundAction {
@@ -144,7 +151,9 @@ export function findRoutes(): FoundRoute[] {
       const handler = declarations.get(method)!;
       const code = handler.getText(src);
       const wrapper = /\bwithWorkshop\(/.test(code) ? "withWorkshop" : /\bwithUser\(/.test(code) ? "withUser" : null;
-      return { id: `${method} ${pattern}`, method, pattern, file, reads: schemaReads(src, handler), wrapper };
+      const library = ts.isVariableDeclaration(handler) && (!ts.isIdentifier(handler.name) || (!!handler.initializer && !wrapper && !ts.isArrowFunction(handler.initializer) && !ts.isFunctionExpression(handler.initializer)));
+      const readsRaw = /\breq(?:uest)?\.(?:text|json|arrayBuffer|formData)\(|searchParams|new URL\(req/.test(code);
+      return { id: `${method} ${pattern}`, method, pattern, file, reads: schemaReads(src, handler), wrapper, library, readsRaw };
     });
   });
 }
