@@ -23,8 +23,13 @@ export async function seed(knex: Knex): Promise<void> {
     const ws = await knex("workshops").where({ slug: d.workshop }).first("id", "currency", "unit_preference", "build_stages");
     if (!ws) continue;
     if (await knex("commissions").where({ workshop_id: ws.id, title: d.title }).first("id")) continue;
-    const [client, builder] = await Promise.all([knex("users").where({ email: d.client }).first("id"), knex("users").where({ email: d.builder }).first("id")]);
-    if (!client || !builder) continue;
+    const [client, builder, owner] = await Promise.all([
+      knex("users").where({ email: d.client }).first("id"),
+      knex("users").where({ email: d.builder }).first("id"),
+      knex("memberships").where({ workshop_id: ws.id, role: "owner" }).orderBy("id").first("user_id as id"),
+    ]);
+    if (!client || !builder || !owner) continue;
+    const signoff = !!(await knex("workshops").where({ id: ws.id }).first("require_stage_signoff"))?.require_stage_signoff;
     await knex.transaction(async (trx) => {
       const year = new Date().getUTCFullYear();
       const number = await nextCommissionNumber(trx, ws.id, year);
@@ -79,11 +84,29 @@ export async function seed(knex: Knex): Promise<void> {
 
       const stages = (typeof ws.build_stages === "string" ? JSON.parse(ws.build_stages) : (ws.build_stages ?? DEFAULT_BUILD_STAGES)) as Array<{ key: string }>;
       const line = [SPEC, DEPOSIT, ...stages.map((s) => s.key), FINAL_SETUP];
-      const history = [{ from_stage: null, to_stage: SPEC, kind: "open", created_at: at(0) }];
-      line.slice(1).forEach((to, i) => history.push({ from_stage: line[i]!, to_stage: to, kind: "advance", created_at: at(2 + (i * 66) / (line.length - 1)) }));
-      await trx("stage_history").insert(
-        history.map((h) => ({ ...h, workshop_id: ws.id, commission_id: commissionId, actor_user_id: builder.id, client_notified_at: h.created_at })),
-      );
+      // As the stage machine has it: the client's approval moves it to the deposit, the deposit to the
+      // first build stage, the builder the rest (signed off by the owner where the workshop asks for it);
+      // the last move is the moment it entered final setup.
+      const history: Array<Record<string, unknown>> = [{ from_stage: null, to_stage: SPEC, kind: "open", actor_user_id: client.id, created_at: at(0), client_notified_at: at(0) }];
+      line.slice(1).forEach((to, i) => {
+        const created = at(2 + (i * 66) / (line.length - 2));
+        const from = line[i]!;
+        const byBuilder = from !== SPEC && from !== DEPOSIT;
+        const needsSignoff = byBuilder && signoff;
+        const signedOff = needsSignoff ? new Date(created.getTime() + DAY / 4) : null;
+        history.push({
+          from_stage: from,
+          to_stage: to,
+          kind: "advance",
+          actor_user_id: from === SPEC ? client.id : byBuilder ? builder.id : owner.id,
+          created_at: created,
+          needs_signoff: needsSignoff,
+          signed_off_at: signedOff,
+          signed_off_by: needsSignoff ? owner.id : null,
+          client_notified_at: signedOff ?? created,
+        });
+      });
+      await trx("stage_history").insert(history.map((h) => ({ ...h, workshop_id: ws.id, commission_id: commissionId })));
     });
   }
 }
