@@ -4,21 +4,7 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/http/api-client";
 import type { LedgerPage } from "@/lib/schemas/books";
-
-export const booksPaths = (slug: string) => {
-  const root = `/api/workshops/${encodeURIComponent(slug)}/books`;
-  return {
-    ledger: (query: string) => `${root}/ledger${query ? `?${query}` : ""}`,
-    ledgerExport: (query: string) => `${root}/ledger/export${query ? `?${query}` : ""}`,
-    ledgerOptions: `${root}/ledger/options`,
-    period: (month: string) => `${root}/reconciliation/${month}`,
-    run: (month: string) => `${root}/reconciliation/${month}/run`,
-    lock: (month: string) => `${root}/reconciliation/${month}/lock`,
-    resolve: (month: string, id: number) => `${root}/reconciliation/${month}/exceptions/${id}/resolve`,
-    review: (month: string, id: number) => `${root}/reconciliation/${month}/changes/${id}/review`,
-    periodExport: (month: string) => `${root}/reconciliation/${month}/export`,
-  };
-};
+import { booksPaths } from "./api-paths";
 
 export interface LedgerOptions {
   firstMonth: string | null;

@@ -6,7 +6,8 @@ import { Empty, Failed, Loading } from "@/components/commissions/query-states";
 import { LedgerFilters } from "@/components/books/ledger-filters";
 import { LedgerTable } from "@/components/books/ledger-table";
 import { changeLedgerView, isLedgerFiltered, ledgerApiQuery, ledgerFilterParams, ledgerViewParams, readLedgerView } from "@/components/books/ledger-view";
-import { booksPaths, useLedger, useLedgerOptions } from "@/components/books/queries";
+import { booksPaths } from "@/components/books/api-paths";
+import { useLedger, useLedgerOptions } from "@/components/books/queries";
 import { useUrlView } from "@/components/books/use-url-view";
 import { buttonClasses } from "@/components/ui/button";
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PERIOD_STATUS } from "@/components/books/labels";
-import { booksPaths } from "@/components/books/queries";
+import { booksPaths } from "@/components/books/api-paths";
 import { formatMinor } from "@/components/commissions/format";
 import { Badge } from "@/components/ui/badge";
 import { Table, TBody, Td, Th, THead } from "@/components/ui/table";

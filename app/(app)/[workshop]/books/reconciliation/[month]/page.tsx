@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { ExceptionCard } from "@/components/books/exception-card";
 import { PERIOD_STATUS } from "@/components/books/labels";
 import { PayoutBreakdown } from "@/components/books/payout-breakdown";
-import { booksPaths } from "@/components/books/queries";
+import { booksPaths } from "@/components/books/api-paths";
 import { formatMinor, formatWhen } from "@/components/commissions/format";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";

@@ -4,7 +4,7 @@
 // refreshes the page (a server component) so every part shows the new state.
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
-import { booksPaths } from "@/components/books/queries";
+import { booksPaths } from "@/components/books/api-paths";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, describedBy } from "@/components/ui/field";
