@@ -83,6 +83,8 @@ export function members(ok: number, allowed: readonly Role[], opts: { commission
 }
 
 const ALL: readonly Role[] = ROLES;
+/** Who keeps the books (ledger.read, reconciliation.manage). */
+const BOOKS: readonly Role[] = ["owner", "bookkeeper"];
 const isClient = (who: Caller) => who === "client" || who === "otherClient";
 const ws = (w: World, rest = "") => `/api/workshops/${w.slug}${rest}`;
 const com = (w: World, id: number, rest = "") => ws(w, `/commissions/${id}${rest}`);
@@ -284,6 +286,36 @@ export const ACCESS_TABLE: Record<string, Row> = {
   "GET /api/workshops/[workshop]/settings": route({ request: (w) => ({ path: ws(w, "/settings") }), expect: members(200, ["owner"]) }),
   "PATCH /api/workshops/[workshop]/settings": route({ request: (w) => ({ path: ws(w, "/settings"), method: "PATCH", json: { depositPercent: 30 } }), expect: members(200, ["owner"]) }),
 
+  // ── Logo and books ─────────────────────────────────────────────────────────────────────────
+  "GET /api/workshops/[workshop]/logo": route({ prepare: (w) => w.logo(), request: (w) => ({ path: ws(w, "/logo") }), expect: members(200, ALL), usesUploads: true }),
+  "GET /api/workshops/[workshop]/books/ledger": route({ request: (w) => ({ path: ws(w, "/books/ledger?status=all&sort=-amount") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/ledger/export": route({ request: (w) => ({ path: ws(w, "/books/ledger/export?status=all") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/ledger/options": route({ request: (w) => ({ path: ws(w, "/books/ledger/options") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/holdings": route({ request: (w) => ({ path: ws(w, "/books/holdings") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/summary": route({ request: (w) => ({ path: ws(w, "/books/summary") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/reconciliation": route({ request: (w) => ({ path: ws(w, "/books/reconciliation") }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/reconciliation/[month]": route({ prepare: (w) => w.openException(), request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}`) }), expect: members(200, BOOKS) }),
+  "GET /api/workshops/[workshop]/books/reconciliation/[month]/export": route({ prepare: (w) => w.openException(), request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}/export`) }), expect: members(200, BOOKS) }),
+  // Compares a month with nothing in it with the payments fake (read only there).
+  "POST /api/workshops/[workshop]/books/reconciliation/[month]/run": route({ prepare: (w) => w.month(false), request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}/run`), method: "POST", json: {} }), expect: members(200, BOOKS) }),
+  // The bookkeeper resolves (or locks) it; the owner then finds it resolved (locked) already.
+  "POST /api/workshops/[workshop]/books/reconciliation/[month]/exceptions/[exceptionId]/resolve": route({
+    prepare: (w) => w.openException(),
+    request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}/exceptions/${t.id}/resolve`), method: "POST", json: { note: "Matched by hand in the matrix" } }),
+    expect: members(200, BOOKS, { except: { owner: 409 } }),
+  }),
+  "POST /api/workshops/[workshop]/books/reconciliation/[month]/lock": route({
+    prepare: (w) => w.month(),
+    request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}/lock`), method: "POST", json: { note: "Matrix lock" } }),
+    expect: members(200, BOOKS, { except: { owner: 409 } }),
+  }),
+  // A change that reached a locked month: reviewed by the owner alone (reconciliation.override).
+  "POST /api/workshops/[workshop]/books/reconciliation/[month]/changes/[changeId]/review": route({
+    prepare: (w) => w.flaggedChange(),
+    request: (w, t) => ({ path: ws(w, `/books/reconciliation/${t.month}/changes/${t.id}/review`), method: "POST", json: { note: "Seen in the matrix" } }),
+    expect: members(200, ["owner"]),
+  }),
+
   // ── Server actions of the workshop's pages ─────────────────────────────────────────────────
   "app/(app)/[workshop]/cohorts/actions.ts#createCohortAction": action({ args: (w) => [w.slug, { name: `Matrix course ${uid()}`, ...dates }], expect: members(200, ["owner"]) }),
   "app/(app)/[workshop]/cohorts/actions.ts#updateCohortAction": action({
@@ -359,6 +391,7 @@ export const ACCESS_TABLE: Record<string, Row> = {
   "app/(app)/[workshop]/members/actions.ts#revokeInvitationAction": action({ prepare: (w) => w.invitation(), args: (w, id) => [w.slug, { invitationId: id }], expect: members(200, ["owner"]) }),
   "app/(app)/[workshop]/members/actions.ts#retryEmailAction": action({ prepare: (w) => w.failedEmail(), args: (w, id) => [w.slug, { messageId: id }], expect: members(200, ["owner"]) }),
   "app/(app)/[workshop]/settings/actions.ts#updateSettingsAction": action({ args: (w) => [w.slug, { depositPercent: 30 }], expect: members(200, ["owner"]) }),
+  "app/(app)/[workshop]/settings/actions.ts#removeLogoAction": action({ prepare: (w) => w.logo(), args: (w) => [w.slug, {}], expect: members(200, ["owner"]), usesUploads: true }),
   "app/(app)/[workshop]/setup/actions.ts#saveSetupRangesAction": action({ prepare: currentRanges, args: (w, ranges) => [w.slug, ranges], expect: members(200, ["owner"]) }),
   "app/(app)/[workshop]/setup/actions.ts#resetSetupRangesAction": action({ args: (w) => [w.slug, {}], expect: members(200, ["owner"]) }),
 

@@ -8,10 +8,11 @@ import type { Role } from "@/lib/auth/permissions";
 import { testDb } from "../setup/test-db";
 import { approveSpec, base, draftSpec, move, openCommission } from "../http/commission-helpers";
 import { addMember, createTestUser, createWorkshopWithMembers, uid, uniqueEmail, type TestMember, type TestWorkshop } from "../http/fixtures";
-import { addPhoto, fileOf, installXhr } from "../http/photo-helpers";
+import { comparedMonth, flaggedChange, openException } from "../http/books-helpers";
+import { addPhoto, fileOf, installXhr, uploadLogo } from "../http/photo-helpers";
 import { anonymous, signIn, type HttpSession } from "../http/session";
 import { commissionInFinalSetup, goodSheet, putSheet, signSheet } from "../http/setup-helpers";
-import { jpegWithGps } from "../support/photos";
+import { jpegWithGps, plainPng } from "../support/photos";
 
 /** Everyone the matrix calls as, in the order each row calls them: refusals first, the owner last. */
 export const CALLERS = ["anonymous", "outsider", "otherClient", "otherBuilder", "client", "bookkeeper", "builder", "owner"] as const;
@@ -45,6 +46,26 @@ export interface World {
   failedEmail(): Promise<number>;
   /** A new client member of A (to remove or change). */
   spareMember(role?: Role): Promise<TestMember>;
+  /** A's logo, uploaded by the owner through the real upload flow (replacing any before). */
+  logo(): Promise<void>;
+  /** A month of A's books no other row uses, compared (as a run would leave it) or not. */
+  month(compared?: boolean): Promise<{ month: string; periodId: number | null }>;
+  /** An open exception in a compared month of A. */
+  openException(): Promise<{ month: string; id: number }>;
+  /** A processor change flagged in a month of A, waiting for the owner's review. */
+  flaggedChange(): Promise<{ month: string; id: number }>;
+}
+
+/** Runs an upload, waiting out the short outages other tests switch on in the shared uploads fake. */
+async function withUploadRetries<T>(upload: () => Promise<T>): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await upload();
+    } catch (err) {
+      if (attempt >= 10) throw err;
+      await new Promise((r) => setTimeout(r, 1_000));
+    }
+  }
 }
 
 export async function makeWorld(): Promise<World> {
@@ -56,6 +77,8 @@ export async function makeWorld(): Promise<World> {
   const as = { anonymous: anonymous(), ...Object.fromEntries(signed) } as Record<Caller, HttpSession>;
   const people = { owner: as.owner, builder: as.builder, bookkeeper: as.bookkeeper, client: as.client };
   let photoCommission: Promise<{ id: number; paymentId: number }> | undefined;
+  // Months before any payment the rows record (these tests pay in the current month), one per call.
+  let months = 0;
 
   const w: World = {
     a,
@@ -102,15 +125,7 @@ export async function makeWorld(): Promise<World> {
       photoCommission ??= w.inBuild();
       const { id } = await photoCommission;
       const bytes = await jpegWithGps(320, 240);
-      // The uploads fake is shared: photos.test.ts switches outages on for a moment; wait them out.
-      for (let attempt = 1; ; attempt++) {
-        try {
-          return { id, photoId: await addPhoto(as.builder, a, id, fileOf(bytes, "matrix.jpg"), "Matrix photo") };
-        } catch (err) {
-          if (attempt >= 10) throw err;
-          await new Promise((r) => setTimeout(r, 1_000));
-        }
-      }
+      return { id, photoId: await withUploadRetries(() => addPhoto(as.builder, a, id, fileOf(bytes, "matrix.jpg"), "Matrix photo")) };
     },
     async cohort() {
       const r = await as.owner.json<{ cohort: { id: number } }>(`/api/workshops/${a.slug}/cohorts`, {
@@ -140,6 +155,24 @@ export async function makeWorld(): Promise<World> {
     },
     async spareMember(role = "client") {
       return addMember(a.id, await createTestUser({ email: uniqueEmail(`matrix-spare-${role}`) }), role);
+    },
+    async logo() {
+      const png = await plainPng(64, 64);
+      const up = await withUploadRetries(() => uploadLogo(as.owner, a.slug, fileOf(png, "matrix-logo.png", "image/png")));
+      if (!up.serverData.ok) throw new Error(`logo refused: ${JSON.stringify(up.serverData)}`);
+    },
+    async month(compared = true) {
+      const n = months++;
+      const month = `${2010 + Math.floor(n / 12)}-${String((n % 12) + 1).padStart(2, "0")}`;
+      return { month, periodId: compared ? await comparedMonth(a, month) : null };
+    },
+    async openException() {
+      const { month, periodId } = await w.month();
+      return { month, id: await openException(a, periodId!, months) };
+    },
+    async flaggedChange() {
+      const { month, periodId } = await w.month();
+      return { month, id: await flaggedChange(a, periodId!, months) };
     },
   };
   return w;
