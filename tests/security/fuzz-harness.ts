@@ -202,10 +202,14 @@ export function tallyReport(tallies: Map<string, FuzzTally>): string {
 }
 
 /**
- * One fuzz file: a world of its own, a test per target (its share of `budget` cases), and the
- * tally of cases and statuses printed at the end.
+ * One fuzz file: a world of its own, a test per target (its share of `budget` cases, run by
+ * `run`), and the tally of cases and statuses printed at the end.
  */
-export function describeFuzz(title: string, targets: FuzzTarget[], opts: { budget: number; minTargets: number; label: (t: FuzzTarget) => string }): void {
+export function describeFuzzOf<T>(
+  title: string,
+  targets: T[],
+  opts: { budget: number; minTargets: number; key: (t: T) => string; label: (t: T) => string; run: (w: World, t: T, o: { numRuns: number; tally: FuzzTally }) => Promise<void> },
+): void {
   const runs = runsPerTarget(opts.budget, targets.length);
   const tallies = new Map<string, FuzzTally>();
   let w: World;
@@ -224,9 +228,18 @@ export function describeFuzz(title: string, targets: FuzzTarget[], opts: { budge
     for (const t of targets) {
       it(opts.label(t), async () => {
         const tally: FuzzTally = { cases: 0, byStatus: {} };
-        tallies.set(`${t.part} ${t.route.id}`, tally);
-        await fuzzTarget(w, t, { numRuns: runs, tally, prepared: await t.row.prepare?.(w), who: fuzzCaller(t) });
+        tallies.set(opts.key(t), tally);
+        await opts.run(w, t, { numRuns: runs, tally });
       });
     }
+  });
+}
+
+/** A fuzz file of route targets (fuzzTargets), each sent inputsFor it by fuzzCaller. */
+export function describeFuzz(title: string, targets: FuzzTarget[], opts: { budget: number; minTargets: number; label: (t: FuzzTarget) => string }): void {
+  describeFuzzOf(title, targets, {
+    ...opts,
+    key: (t) => `${t.part} ${t.route.id}`,
+    run: async (w, t, { numRuns, tally }) => fuzzTarget(w, t, { numRuns, tally, prepared: await t.row.prepare?.(w), who: fuzzCaller(t) }),
   });
 }
