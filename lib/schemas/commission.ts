@@ -69,8 +69,8 @@ export const offlinePaymentSchema = z.object({
   amountMinor: z.int().positive().max(1e11),
   reference: z.string().trim().min(2, "Give the reference (bank transfer, receipt number…).").max(120),
   // The day the money arrived: not in the future, and inside what the payment's timestamp can hold.
+  // (Checked only once it is a date, so a malformed one gets the one message about its format.)
   paidOn: isoDate
-    .refine((d) => d >= "2000-01-01", "Use a date from 2000 on.")
-    .refine((d) => d <= tomorrowUtc(), "A payment cannot have arrived in the future.")
+    .pipe(z.string().refine((d) => d >= "2000-01-01", "Use a date from 2000 on.").refine((d) => d <= tomorrowUtc(), "A payment cannot have arrived in the future."))
     .optional(),
 });
