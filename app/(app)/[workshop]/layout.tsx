@@ -19,6 +19,7 @@ export default async function WorkshopLayout({ children, params }: { children: R
     ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
     ...(can("setup.read") ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
     ...(can("overview.read") ? [{ href: `/${workshop.slug}/overview`, label: "Overview" }] : []),
+    ...(can("ledger.read") ? [{ href: `/${workshop.slug}/books`, label: "Books" }] : []),
     ...(can("cohort.read") ? [{ href: `/${workshop.slug}/cohorts`, label: "Cohorts" }] : []),
     ...(can("settings.manage") ? [{ href: `/${workshop.slug}/settings`, label: "Settings" }] : []),
   ];
