@@ -30,6 +30,8 @@ import { signInInBrowser } from "./sign-in";
 import { watchProgress } from "./upload-progress";
 
 const expect = baseExpect.configure({ timeout: 20_000 });
+// A step that cannot happen fails within a minute instead of holding the run until the test times out.
+test.use({ actionTimeout: 60_000, navigationTimeout: 60_000 });
 const TABLET = { width: 1024, height: 768 };
 const PHONE = { width: 390, height: 844 };
 const FIRST = DEFAULT_BUILD_STAGES[0]!;

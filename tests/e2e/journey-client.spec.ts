@@ -21,6 +21,8 @@ import { keepScreenshot } from "./screenshot";
 import { openEmail, signInInBrowser } from "./sign-in";
 
 const expect = baseExpect.configure({ timeout: 20_000 });
+// A step that cannot happen fails within a minute instead of holding the run until the test times out.
+test.use({ actionTimeout: 60_000, navigationTimeout: 60_000 });
 const PHONE = { width: 390, height: 844 };
 const [TIMBER, SHAPING] = DEFAULT_BUILD_STAGES as [(typeof DEFAULT_BUILD_STAGES)[number], (typeof DEFAULT_BUILD_STAGES)[number]];
 
