@@ -22,13 +22,13 @@ const extra = process.argv.slice(3);
 // `npm test -- --serve` builds and starts the test stack and keeps it up without running anything:
 // then `TEST_APP_URL=http://localhost:3100 npx vitest run tests/http/x.test.ts` as often as needed.
 const serveOnly = extra.includes("--serve");
-const wantE2e = extra.length === 0 || extra.includes("--e2e");
-// Words naming browser specs (`*.spec.ts`) go to Playwright, the rest to Vitest; with specs named and
-// no Vitest file, Vitest is skipped: `npm test -- --e2e tests/e2e/x.spec.ts` runs that spec alone.
-const isSpec = (a) => /\.spec\.ts$/.test(a);
+// Playwright spec files among the words go to Playwright (only those run), the rest to Vitest; with
+// only spec files named, Vitest is skipped.
+const isSpec = (a) => a.endsWith(".spec.ts");
 const specArgs = extra.filter(isSpec);
 const vitestArgs = extra.filter((a) => a !== "--e2e" && a !== "--serve" && !isSpec(a));
-const skipVitest = specArgs.length > 0 && !vitestArgs.some((a) => !a.startsWith("-"));
+const wantE2e = extra.length === 0 || extra.includes("--e2e") || specArgs.length > 0;
+const wantVitest = vitestArgs.length > 0 || specArgs.length === 0;
 if (!["start", "dev", "test"].includes(mode)) {
   console.error(`usage: launcher.mjs start|dev|test (got ${mode})`);
   process.exit(2);
@@ -196,7 +196,7 @@ async function main() {
 
   const testEnv = { ...appEnv, NODE_ENV: "test", TEST_APP_URL: env.APP_URL };
   let status = 0;
-  if (!skipVitest) {
+  if (wantVitest) {
     const vitest = spawnSync(process.execPath, [join(ROOT, "node_modules", "vitest", "vitest.mjs"), "run", ...vitestArgs], {
       cwd: ROOT,
       env: testEnv,
