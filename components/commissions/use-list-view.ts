@@ -11,13 +11,16 @@ export function useListView(): [ListView, (change: Partial<ListView>, opts?: { r
   const view = useMemo(() => readListView(new URLSearchParams(params.toString())), [params]);
   const setView = useCallback(
     (change: Partial<ListView>, opts: { replace?: boolean } = {}) => {
-      const next = listViewParams(changeView(view, change)).toString();
+      // Start from the address bar as it is now, not the last render's view: two changes made
+      // before React re-renders (one select after another) must both survive.
+      const current = readListView(new URLSearchParams(window.location.search));
+      const next = listViewParams(changeView(current, change)).toString();
       const url = `${window.location.pathname}${next ? `?${next}` : ""}`;
       // Typing in the search box replaces the entry; each deliberate change can be undone with Back.
       if (opts.replace) window.history.replaceState(null, "", url);
       else window.history.pushState(null, "", url);
     },
-    [view],
+    [],
   );
   return [view, setView];
 }
