@@ -3,13 +3,16 @@
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
 import type { UploadThingError } from "uploadthing/server";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { useUploadThing } from "@/components/photos/upload-helpers";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { ACCEPTED_MIME_TYPES, formatBytes, uploadBatchProblem } from "@/lib/photos/rules";
-import { photoCaptionSchema, type PhotoUploadResult } from "@/lib/schemas/photo";
+import type { PhotoUploadResult } from "@/lib/schemas/photo";
+
+const photoCaptionSchema = lazySchema(() => import("@/lib/schemas/photo").then((m) => m.photoCaptionSchema));
 
 type Phase = "idle" | "sending" | "processing" | "done" | "failed";
 
@@ -49,7 +52,7 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
   async function submit(e: FormEvent) {
     e.preventDefault();
     setNotice(null);
-    const checkedCaption = photoCaptionSchema.safeParse(caption);
+    const checkedCaption = await photoCaptionSchema.safeParse(caption);
     const problem = uploadBatchProblem(files.map((f) => ({ name: f.name, size: f.size, type: f.type })));
     const next = { caption: checkedCaption.success ? undefined : checkedCaption.error.issues[0]?.message, files: problem?.message };
     setErrors(next);
