@@ -19,7 +19,7 @@ import { prepareMainPages } from "../tests/http/main-pages";
 import { benchCommissionList, bulkOwnerCookie, prepareBulkWorkshop } from "./bench/commissions";
 import { benchCompute, computeInProcess } from "./bench/compute";
 import { FIRST_LOAD_BUDGET_KB, weighPage } from "./bench/first-load-js";
-import { benchStripeEnv, closeBenchDb, formatTable, loadText, pointTestHelpersAt, prepareDatabase, startApp, startStripeFake, type BenchRow, type LoadPlan } from "./bench/harness";
+import { BENCH_COLUMNS, benchCells, benchStripeEnv, closeBenchDb, formatTable, loadText, pointTestHelpersAt, prepareDatabase, startApp, startStripeFake, type BenchRow, type LoadPlan } from "./bench/harness";
 import { benchCommissionPage, benchOverviewPage } from "./bench/pages";
 import { benchWebhook, preparePaidCheckout } from "./bench/webhook";
 
@@ -37,36 +37,17 @@ interface PageRow {
 }
 
 function table(rows: BenchRow[], pages: PageRow[]): string {
-  const header = ["benchmark", "conns", "p50 ms", "p95 ms", "req/s", "vs floor", "CPU ms/req", "DB stmts/req", "failed", "first-load JS gz", "goal"];
   const body = [
-    ...rows.map((r) => [
-      r.kind === "floor" ? `  floor: ${r.name}` : r.name,
-      String(r.connections),
-      r.p50Ms.toFixed(1),
-      r.p95Ms.toFixed(1),
-      r.rps.toFixed(0),
-      r.ratioToFloor === undefined ? "—" : `${(100 * r.ratioToFloor).toFixed(0)} %`,
-      r.cpuMsPerRequest.toFixed(2),
-      r.statementsPerRequest.toFixed(1),
-      String(r.unexpected),
-      "",
-      r.goal ?? "",
-    ]),
+    ...rows.map((r) => [...benchCells(r), "", r.goal ?? ""]),
     ...pages.map((p) => [
       `first load: ${p.label}`,
-      "",
-      "",
-      "",
-      "",
-      "",
-      "",
-      "",
+      ...Array<string>(7).fill(""),
       p.status === 200 ? "0" : `HTTP ${p.status}`,
       `${p.gzipKb.toFixed(1)} kB`,
       `≤ ${FIRST_LOAD_BUDGET_KB} kB: ${p.gzipKb <= FIRST_LOAD_BUDGET_KB ? "met" : "NOT met"}`,
     ]),
   ];
-  return formatTable(header, body);
+  return formatTable([...BENCH_COLUMNS, "first-load JS gz", "goal"], body);
 }
 
 async function main() {

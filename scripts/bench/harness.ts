@@ -316,11 +316,12 @@ export function formatTable(header: string[], body: string[][]): string {
   return [line(header), `|${widths.map((w) => "-".repeat(w + 2)).join("|")}|`, ...body.map(line)].join("\n");
 }
 
-/** The one table for every benchmark: latency, throughput, cost per request and the ratio to its floor. */
-export function printTable(rows: BenchRow[]): string {
-  const header = ["benchmark", "conns", "p50 ms", "p95 ms", "req/s", "vs floor", "server CPU ms/req", "DB statements/req", "failed", "goal"];
-  const body = rows.map((r) => [
-    r.kind === "floor" ? `floor: ${r.name}` : r.name,
+/** The measured columns of a row (the goal and any extra column come after). */
+export const BENCH_COLUMNS = ["benchmark", "conns", "p50 ms", "p95 ms", "req/s", "vs floor", "server CPU ms/req", "DB statements/req", "failed"];
+
+export function benchCells(r: BenchRow): string[] {
+  return [
+    r.kind === "floor" ? `  floor: ${r.name}` : r.name,
     String(r.connections),
     r.p50Ms.toFixed(1),
     r.p95Ms.toFixed(1),
@@ -329,9 +330,12 @@ export function printTable(rows: BenchRow[]): string {
     r.cpuMsPerRequest.toFixed(2),
     r.statementsPerRequest.toFixed(1),
     String(r.unexpected),
-    r.goal ?? "",
-  ]);
-  const out = formatTable(header, body);
+  ];
+}
+
+/** The one table for every benchmark: latency, throughput, cost per request and the ratio to its floor. */
+export function printTable(rows: BenchRow[]): string {
+  const out = formatTable([...BENCH_COLUMNS, "goal"], rows.map((r) => [...benchCells(r), r.goal ?? ""]));
   console.log(out);
   return out;
 }
