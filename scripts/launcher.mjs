@@ -2,8 +2,9 @@
 // The one launcher behind `npm start`, `npm run dev` and `npm test`.
 // Plain Node.js with no dependencies: it runs on a fresh clone before `npm ci`.
 //
-//   start  install deps, start MariaDB, migrate, seed the demo, start the fakes and worker,
-//          build, serve on APP_HOST:APP_PORT until Ctrl-C
+//   start  install deps, start MariaDB, migrate, start the fakes and worker, seed the demo (the
+//          books demo pays through the payments fake, so it needs the fakes up), build, serve on
+//          APP_HOST:APP_PORT until Ctrl-C
 //   dev    the same with `next dev`
 //   test   install deps, start MariaDB, migrate the test database fresh, start the fakes on test
 //          ports, build and serve a test app, run Vitest, then the browser tests; exit with their status
@@ -159,10 +160,10 @@ async function main() {
     rmSync(resolve(ROOT, env.FAKES_DATA_DIR), { recursive: true, force: true });
   } else {
     tsx("db/cli.ts", ["migrate"], { ...env, KNEX_ENV: "development" }, "migrations");
-    tsx("db/cli.ts", ["seed"], { ...env, KNEX_ENV: "development" }, "demo seed");
   }
 
   await startServices(env);
+  if (mode !== "test") tsx("db/cli.ts", ["seed"], { ...env, KNEX_ENV: "development" }, "demo seed");
 
   const host = env.APP_HOST ?? "127.0.0.1";
   const port = env.APP_PORT ?? "3000";

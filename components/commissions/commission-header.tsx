@@ -1,16 +1,30 @@
 "use client";
 
 // The commission's header: number, title, stage, client, builder, target date. It starts from the
-// summary the server read for the access check and follows the API after every change.
+// summary the server read for the access check and follows the API after every change. Pages that
+// change the commission through server actions (payments, setup, photos) re-render the layout with
+// a newer summary: that one wins, and the cached API answers are marked stale.
+import { useQueryClient } from "@tanstack/react-query";
+import { useEffect, useRef } from "react";
 import { Badge } from "@/components/ui/badge";
 import type { CommissionSummary } from "@/lib/schemas/commission-out";
+import { commissionKeys } from "./api-paths";
 import { formatDay } from "./format";
 import { useCommission } from "./queries";
 import { StageBadge } from "./stage-badge";
 
 export function CommissionHeader({ slug, initial, showClient }: { slug: string; initial: CommissionSummary; showClient: boolean }) {
   const detail = useCommission(slug, initial.id);
-  const c: CommissionSummary = detail.data ?? initial;
+  const qc = useQueryClient();
+  const seen = useRef(`${initial.updatedAt}|${initial.stage}`);
+  useEffect(() => {
+    // The server read the commission again (a server action or a refresh): the browser's copies follow.
+    const now = `${initial.updatedAt}|${initial.stage}`;
+    if (seen.current === now) return;
+    seen.current = now;
+    void qc.invalidateQueries({ queryKey: commissionKeys.all(slug) });
+  }, [qc, slug, initial.updatedAt, initial.stage]);
+  const c: CommissionSummary = detail.data && detail.data.updatedAt >= initial.updatedAt ? detail.data : initial;
   return (
     <header className="space-y-2" data-testid="commission-header">
       <p className="font-mono text-sm font-semibold text-rosewood-700">{c.number}</p>

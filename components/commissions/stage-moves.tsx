@@ -2,7 +2,9 @@
 
 // The moves open to the caller, as the detail response lists them: allowed ones as buttons, refused
 // ones disabled with the reason and what is missing. A note travels with the move (timeline and
-// the client's e-mail). Hold, resume, back and cancel ask for confirmation first.
+// the client's e-mail). Hold, resume, back and cancel ask for confirmation first. A move that waits
+// for something (the approval, the deposit, the setup sheet) links to the tab that settles it.
+import Link from "next/link";
 import { useId, useState } from "react";
 import { Alert } from "@/components/ui/alert";
 import { Button, type ButtonVariant } from "@/components/ui/button";
@@ -10,10 +12,14 @@ import { Dialog } from "@/components/ui/dialog";
 import { Textarea } from "@/components/ui/input";
 import { errorMessage } from "@/lib/http/api-client";
 import type { CommissionDetail, TransitionOption } from "@/lib/schemas/commission-out";
+import type { MissingGuard } from "@/lib/workflow/machine";
 import { commissionPaths } from "./api-paths";
 import { useCommissionChange } from "./use-commission-change";
 
 type Action = TransitionOption["action"];
+
+/** Where each missing thing is settled, for the tabs this person may open. */
+export type FixLinks = Partial<Record<MissingGuard, { href: string; label: string }>>;
 
 const VARIANT: Record<Action, ButtonVariant> = { advance: "primary", back: "secondary", hold: "secondary", resume: "primary", cancel: "secondary" };
 
@@ -52,7 +58,7 @@ function confirmText(t: TransitionOption): string | null {
   }
 }
 
-export function StageMoves({ slug, commission }: { slug: string; commission: CommissionDetail }) {
+export function StageMoves({ slug, commission, fixLinks = {} }: { slug: string; commission: CommissionDetail; fixLinks?: FixLinks }) {
   const noteId = useId();
   const [note, setNote] = useState("");
   const [confirming, setConfirming] = useState<TransitionOption | null>(null);
@@ -112,9 +118,23 @@ export function StageMoves({ slug, commission }: { slug: string; commission: Com
                 <p>{t.missing.length ? `${t.reason.split(":")[0]}.` : t.reason}</p>
                 {t.missing.length ? (
                   <ul className="ml-4 list-disc" aria-label="Missing">
-                    {t.missing.map((m) => (
-                      <li key={m}>{m}</li>
-                    ))}
+                    {t.missing.map((m, i) => {
+                      const guard = t.missingGuards[i];
+                      const fix = guard ? fixLinks[guard] : undefined;
+                      return (
+                        <li key={m}>
+                          {m}
+                          {fix ? (
+                            <>
+                              {" "}
+                              <Link href={fix.href} className="font-semibold text-rosewood-700 underline">
+                                {fix.label}
+                              </Link>
+                            </>
+                          ) : null}
+                        </li>
+                      );
+                    })}
                   </ul>
                 ) : null}
               </div>

@@ -1,11 +1,13 @@
-// A commission's photos grouped by stage, for any page that has the caller's workshop context (the
-// photos page; the commission's timeline can embed it as it is). A server component: it reads the
-// photos the caller may see and links each to the authorised image route.
+// A commission's photos grouped by stage, for any page that has the caller's workshop context: the
+// full gallery (the photos page) and compact strips per stage (the overview's timeline). Server
+// components: they read the photos the caller may see and link each to the authorised image route.
+import Link from "next/link";
+import type { ReactNode } from "react";
 import type { ActionResult } from "@/lib/auth/actions";
 import type { WorkshopContext } from "@/lib/auth/workshop-access";
 import { listCommissionPhotos } from "@/lib/data/photos";
 import { photoFileUrl } from "@/lib/photos/urls";
-import type { PhotoOut } from "@/lib/schemas/photo";
+import type { PhotoOut, PhotoStageGroup } from "@/lib/schemas/photo";
 import { RemovePhotoButton } from "./remove-photo-button";
 
 export type RemovePhotoAction = (slug: string, input: { commissionId: number; photoId: number }) => Promise<ActionResult<unknown>>;
@@ -76,4 +78,41 @@ export async function StagePhotos({
       ))}
     </div>
   );
+}
+
+/** How many thumbnails a timeline strip shows before pointing to the photos page. */
+const STRIP_SIZE = 4;
+
+function StagePhotoStrip({ slug, group, photosHref }: { slug: string; group: PhotoStageGroup; photosHref: string }) {
+  const shown = group.photos.slice(-STRIP_SIZE); // the newest of the stage
+  const more = group.photos.length - shown.length;
+  return (
+    <div role="group" aria-label={`Photos: ${group.label}`} className="space-y-2">
+      <ul className="grid grid-cols-2 gap-2 sm:grid-cols-4">
+        {shown.map((p) => (
+          <li key={p.id} className="min-w-0">
+            <a href={photoFileUrl(slug, p, "full")} target="_blank" rel="noopener" className="block overflow-hidden rounded-chip border border-spruce-200 bg-spruce-100">
+              <img src={photoFileUrl(slug, p, "thumb")} alt={p.caption} width={p.thumbWidth} height={p.thumbHeight} loading="lazy" className="aspect-[4/3] w-full object-cover" />
+            </a>
+          </li>
+        ))}
+      </ul>
+      <p className="text-xs text-graphite-600">
+        {group.photos.length} {group.photos.length === 1 ? "photo" : "photos"} of {group.label}
+        {more > 0 ? ` (${more} more not shown)` : ""} ·{" "}
+        <Link href={photosHref} className="font-semibold text-rosewood-700 underline">
+          Open the Photos tab
+        </Link>
+      </p>
+    </div>
+  );
+}
+
+/**
+ * The caller's photos of a commission as one compact strip per stage, in the order of the stage
+ * line, for the overview's timeline (a client sees the stages they have been told of).
+ */
+export async function stagePhotoStrips(ctx: WorkshopContext, commissionId: number, photosHref: string): Promise<Array<{ stage: string; strip: ReactNode }>> {
+  const groups = await listCommissionPhotos(ctx.scope, commissionId);
+  return groups.map((g) => ({ stage: g.stage, strip: <StagePhotoStrip key={g.stage} slug={ctx.workshop.slug} group={g} photosHref={photosHref} /> }));
 }

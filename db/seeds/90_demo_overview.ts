@@ -23,6 +23,8 @@ export async function seed(knex: Knex): Promise<void> {
       ends_on: dateIn(DEMO_COHORT.lengthDays - DEMO_COHORT.startsDaysAgo, now),
     });
     for (const userId of builderIds) await trx("cohort_builders").insert({ workshop_id: ws.id, cohort_id: cohortId, user_id: userId });
-    await trx("commissions").where({ workshop_id: ws.id }).whereIn("builder_user_id", builderIds).whereNot("stage", "cancelled").update({ cohort_id: cohortId });
+    await trx("commissions").where({ workshop_id: ws.id }).whereIn("builder_user_id", builderIds).whereNot("stage", "cancelled")
+      // Keep each commission's own last-changed time: joining a cohort is not a change the list should show.
+      .update({ cohort_id: cohortId, updated_at: trx.raw("??", ["updated_at"]) });
   });
 }

@@ -30,7 +30,7 @@ export const ADMIN_ENDPOINTS: Record<string, string> = {
   "POST /admin/checkout/sessions/:id/pay": "{card_number?=4242…, name?, email?} — pay without the browser (same path as the page)",
   "POST /admin/payouts/run": "{currency?} — pay out every available balance now",
   "POST /admin/balance-transactions": '{amount, currency, type?:"charge"|"adjustment", description?} — money the app has no record of',
-  "POST /admin/balance-transactions/:id": "{amount?, fee?} — change the amounts silently (no event)",
+  "POST /admin/balance-transactions/:id": "{amount?, fee?, currency?, exchange_rate?} — change the amounts (or the settlement currency) silently (no event)",
   "POST /admin/refunds": "{payment_intent|charge, amount?, reason?} — refund without telling the app (no webhook)",
   "POST /admin/refunds/:id/fail": "{reason?} — the refund bounces: refund.updated + refund.failed, money back in the balance",
   "GET /admin/fees": "the fee formula",
@@ -208,6 +208,13 @@ export function registerAdmin(router: Router, ctx: StripeContext, outage: Outage
       const t = found(s().balance_transactions[id!], "balance transaction", id!);
       const amount = optInt(p, "amount", "amount", -1e12);
       const fee = optInt(p, "fee", "fee", 0);
+      const currency = optString(p, "currency")?.toLowerCase();
+      if (currency !== undefined && !/^[a-z]{3}$/.test(currency)) throw invalid("currency must be a 3-letter code", "currency");
+      const rate = p.exchange_rate === undefined ? undefined : Number(p.exchange_rate);
+      if (rate !== undefined && !(rate > 0)) throw invalid("exchange_rate must be a positive number", "exchange_rate");
+      // Settled in another currency than charged: the processor converted it (at exchange_rate).
+      if (currency) t.currency = currency;
+      if (rate !== undefined) t.exchange_rate = rate;
       if (amount !== null) t.amount = amount;
       if (fee !== null) {
         t.fee = fee;

@@ -151,7 +151,7 @@ export interface BalanceTransaction {
   created: number;
   currency: string;
   description: string | null;
-  exchange_rate: null;
+  exchange_rate: number | null;
   fee: number;
   fee_details: { amount: number; application: null; currency: string; description: string; type: "stripe_fee" }[];
   net: number;

@@ -46,6 +46,7 @@ export const PERMISSIONS = [
   "settings.manage", // name, units, currency
   "ledger.read",
   "reconciliation.manage",
+  "reconciliation.override", // change what a locked (reconciled) month holds: the owner alone
   "overview.read", // the workshop's dashboards
   "cohort.read", // course cohorts (a builder: the cohorts they belong to)
   "cohort.manage", // create, change and remove cohorts

@@ -8,6 +8,7 @@ import { DEPOSIT } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow } from "./commission-access";
 import { paidFlags, paymentTotals } from "./payment-totals";
+import { assertMayChangeMonths, logLockedChange } from "./reconciliation-locks";
 import { actorFor, applyTransition, loadGuardFacts } from "./stage-transitions";
 import { inTransaction, type Trx } from "./transaction";
 import { getWorkshopSettings } from "./workshop-settings";
@@ -45,6 +46,8 @@ export async function recordOfflinePayment(scope: WorkshopScope, commissionId: n
       ]);
     }
     const paidAt = input.paidOn ? new Date(`${input.paidOn}T12:00:00Z`) : new Date();
+    // A payment dated in a reconciled (locked) month needs the owner, and is logged.
+    const lockedMonths = await assertMayChangeMonths(trx, scope, [paidAt]);
     const [id] = await trx("payments").insert({
       workshop_id: scope.workshopId,
       commission_id: commissionId,
@@ -64,6 +67,11 @@ export async function recordOfflinePayment(scope: WorkshopScope, commissionId: n
       entityType: "payment",
       entityId: Number(id),
       data: { commissionId, kind: input.kind, amountMinor: input.amountMinor, currency: row.currency, reference: input.reference },
+    });
+    await logLockedChange(trx, scope, lockedMonths, {
+      action: "payment.recorded",
+      paymentId: Number(id),
+      detail: { commissionId, kind: input.kind, amountMinor: input.amountMinor, currency: row.currency, paidAt: paidAt.toISOString() },
     });
     const advanced = input.kind === "deposit" ? await advancePastDepositIfPaid(trx, scope, commissionId) : false;
     const after = paidFlags(await paymentTotals(trx, scope.workshopId, commissionId), row);

@@ -12,8 +12,9 @@ import type { InvoiceKind } from "@/lib/money/invoices";
 import { enqueueEmail } from "@/lib/outbox/enqueue";
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow, type CommissionRow } from "./commission-access";
-import type { PaymentRow } from "./payment-ledger";
+import { loadPaymentRows, type PaymentRow } from "./payment-ledger";
 import { advancePastDepositIfPaid } from "./payments";
+import { flagProcessorChanges } from "./reconciliation-locks";
 import { inTransaction, isDuplicateKey, iso, type Trx } from "./transaction";
 import { getWorkshopSettings } from "./workshop-settings";
 
@@ -241,10 +242,13 @@ export async function applyCheckoutSnapshot(scope: WorkshopScope, commissionId: 
         throw err;
       }
       const row = await getVisibleCommissionRow(scope, commissionId, { trx, forUpdate: true });
+      const before = await loadPaymentRows(trx, scope.workshopId, commissionId);
       const { payment, newlyPaid } = await syncPayment(trx, scope, row, snap);
       // The stage moves on what was paid before any refund of it, as it would have in order.
       if (newlyPaid && snap.kind === "deposit") await advancePastDepositIfPaid(trx, scope, commissionId);
       if (payment?.status === "paid") await syncRefunds(trx, scope, row, payment, snap.refunds);
+      // Applied whatever month it concerns; a change to a reconciled month is flagged for the owner.
+      await flagProcessorChanges(trx, scope, event, before, await loadPaymentRows(trx, scope.workshopId, commissionId));
       return "applied";
     });
   } catch (err) {

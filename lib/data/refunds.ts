@@ -8,6 +8,7 @@ import type { PaymentOut, RefundRequest } from "@/lib/schemas/payment";
 import { writeAudit } from "./audit";
 import { getVisibleCommissionRow } from "./commission-access";
 import { loadPaymentRows, toLedgerLine, toPaymentOut, type PaymentRow } from "./payment-ledger";
+import { assertMayChangeMonths, logLockedChange } from "./reconciliation-locks";
 import { inTransaction } from "./transaction";
 
 export interface RefundProcessor {
@@ -36,6 +37,8 @@ export async function requestRefund(scope: WorkshopScope, commissionId: number, 
         { path: "amountMinor", message: `At most ${left} (minor units) can still be refunded.` },
       ]);
     }
+    // Refunding a payment of a reconciled (locked) month, or on a locked day, needs the owner.
+    const lockedMonths = await assertMayChangeMonths(trx, scope, [new Date(payment.paid_at ?? payment.created_at), new Date()]);
     const reason = input.reason || null;
     const base = {
       workshop_id: scope.workshopId,
@@ -75,6 +78,11 @@ export async function requestRefund(scope: WorkshopScope, commissionId: number, 
       entityType: "payment",
       entityId: id,
       data: { commissionId, refundOf: payment.id, amountMinor: amount, currency: payment.currency, reason, stage: row.stage },
+    });
+    await logLockedChange(trx, scope, lockedMonths, {
+      action: payment.method === "offline" ? "refund.recorded" : "refund.requested",
+      paymentId: id,
+      detail: { commissionId, refundOf: payment.id, amountMinor: amount, currency: payment.currency },
     });
     const after = await loadPaymentRows(trx, scope.workshopId, commissionId);
     return toPaymentOut(scope, after.find((r) => r.id === id) as PaymentRow, after);

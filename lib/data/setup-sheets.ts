@@ -198,12 +198,30 @@ export async function reopenSetupSheet(scope: WorkshopScope, commissionId: numbe
   });
 }
 
+/** A signed revision's summary lines in the workshop's unit, with who signed it and when. */
+function signedSummaryLines(row: SheetRow, settings: WorkshopSettings): { revision: number; signedAt: string | null; lines: string[] } {
+  const r = toRevision(row);
+  const signature = { revision: r.revision, builderName: r.builderSignedBy?.name ?? null, ownerName: r.ownerSignedBy?.name ?? null, signedAt: r.signedAt };
+  return { revision: r.revision, signedAt: r.signedAt, lines: setupSummaryLines(r.values, settings.unitPreference, signature) };
+}
+
 /** The summary lines of the current revision when it is signed (for the delivery e-mail). */
 export async function setupSummaryForDelivery(trx: Trx, scope: WorkshopScope, commissionId: number, settings: WorkshopSettings): Promise<string[]> {
   const current = await currentSheetRow(trx, scope, commissionId);
   if (!current?.signed_at) return [];
-  const r = toRevision(current);
-  return setupSummaryLines(r.values, settings.unitPreference, { revision: r.revision, builderName: r.builderSignedBy?.name ?? null, ownerName: r.ownerSignedBy?.name ?? null, signedAt: r.signedAt });
+  return signedSummaryLines(current, settings).lines;
+}
+
+/**
+ * The latest signed revision's summary, as the commission's overview shows it to everyone who may
+ * see the commission (null until a revision is signed; a reopened sheet keeps showing the last one).
+ */
+export async function getSignedSetupSummary(scope: WorkshopScope, commissionId: number): Promise<{ revision: number; signedAt: string | null; lines: string[] } | null> {
+  return inTransaction(async (trx) => {
+    await getVisibleCommissionRow(scope, commissionId, { trx });
+    const row = await latestSignedSheetRow(trx, scope, commissionId);
+    return row ? signedSummaryLines(row, await getWorkshopSettings(scope, trx)) : null;
+  });
 }
 
 export interface SetupQueueItem {

@@ -204,5 +204,6 @@ export async function transitionOptions(trx: Trx, scope: WorkshopScope, row: Com
     allowed: result.ok,
     reason: result.ok ? null : result.reason,
     missing: result.ok ? [] : (result.missing ?? []),
+    missingGuards: result.ok ? [] : (result.missingGuards ?? []),
   }));
 }

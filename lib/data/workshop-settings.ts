@@ -9,6 +9,7 @@ import type { WorkshopSettingsOut, WorkshopSettingsPatch } from "@/lib/schemas/w
 import { removedStageKeys } from "@/lib/workflow/stage-template";
 import { DEFAULT_BUILD_STAGES, stageLabel, type BuildStage } from "@/lib/workflow/stages";
 import { writeAudit } from "./audit";
+import { workshopLogoPath } from "./workshop-logo";
 import { inTransaction, type Trx } from "./transaction";
 
 export interface WorkshopSettings {
@@ -66,7 +67,8 @@ export function toSettingsOut(s: WorkshopSettings): WorkshopSettingsOut {
     buildStages: s.buildStages.map(({ key, label }) => ({ key, label })),
     requireStageSignoff: s.requireStageSignoff,
     emailSenderName: s.emailSenderName,
-    logoFileKey: s.logoFileKey,
+    // The store's key never leaves the app: the page and the route get our own logo address.
+    logoUrl: workshopLogoPath(s.slug, s.logoFileKey),
   };
 }
 

@@ -1,12 +1,15 @@
-// The app's UploadThing file router: one route, `stagePhoto`, served by app/api/uploadthing/route.ts.
-// The SDK checks the claimed type, size and count against the route config after our middleware
-// has done the same with messages a person understands; the bytes themselves are judged in
-// onUploadComplete (lib/photos/upload-flow.ts).
+// The app's UploadThing file router, served by app/api/uploadthing/route.ts: `stagePhoto` (a
+// commission's photos) and `workshopLogo` (the owner's logo for the workshop). The SDK checks the
+// claimed type, size and count against the route config after our middleware has done the same
+// with messages a person understands; the bytes themselves are judged in onUploadComplete
+// (lib/photos/upload-flow.ts, lib/photos/logo-flow.ts).
 import { ZodError } from "zod";
 import { createUploadthing, type FileRouter } from "uploadthing/next";
 import { UploadThingError } from "uploadthing/server";
 import { toErrorBody, zodIssues, type ErrorCode } from "@/lib/http/errors";
 import { photoUploadInputSchema } from "@/lib/schemas/photo";
+import { logoUploadInputSchema } from "@/lib/schemas/workshop-logo";
+import { authoriseLogoUpload, ingestUploadedLogo } from "./logo-flow";
 import { MAX_PHOTOS_PER_UPLOAD } from "./rules";
 import { authorisePhotoUpload, ingestUploadedPhoto } from "./upload-flow";
 
@@ -40,6 +43,15 @@ function toUploadError(err: unknown): UploadThingError<UploadErrorBody> {
   });
 }
 
+/** Runs a route's middleware; whatever it throws leaves as the SDK's error carrying our error body. */
+async function asUploadError<T>(middleware: () => Promise<T>): Promise<T> {
+  try {
+    return await middleware();
+  } catch (err) {
+    throw toUploadError(err);
+  }
+}
+
 function isUploadErrorBody(v: unknown): v is UploadErrorBody {
   return !!v && typeof v === "object" && typeof (v as UploadErrorBody).error?.code === "string";
 }
@@ -65,16 +77,15 @@ const f = createUploadthing({ errorFormatter: formatUploadError });
 export const photoFileRouter = {
   stagePhoto: f({ image: { maxFileSize: "8MB", maxFileCount: MAX_PHOTOS_PER_UPLOAD, minFileCount: 1, acl: "private" } })
     .input(photoUploadInputSchema)
-    .middleware(async ({ input, files }) => {
-      try {
-        return await authorisePhotoUpload(input, files);
-      } catch (err) {
-        throw toUploadError(err);
-      }
-    })
+    .middleware(({ input, files }) => asUploadError(() => authorisePhotoUpload(input, files)))
     // Never throws: a refusal is the file's server data, which the uploader shows (the SDK would
     // otherwise swallow the error and the upload would look successful).
     .onUploadComplete(({ metadata, file }) => ingestUploadedPhoto(metadata, file)),
+  // One image of at most 2 MB (MAX_LOGO_BYTES), kept as a PNG of at most 512 px (LOGO_EDGE_PX).
+  workshopLogo: f({ image: { maxFileSize: "2MB", maxFileCount: 1, minFileCount: 1, acl: "private" } })
+    .input(logoUploadInputSchema)
+    .middleware(({ input, files }) => asUploadError(() => authoriseLogoUpload(input, files)))
+    .onUploadComplete(({ metadata, file }) => ingestUploadedLogo(metadata, file)),
 } satisfies FileRouter;
 
 export type PhotoFileRouter = typeof photoFileRouter;

@@ -14,6 +14,9 @@ export const ACCEPTED_MIME_TYPES = ["image/jpeg", "image/png", "image/webp", "im
 /** Longest edge of the version we serve, and of the thumbnail. */
 export const DISPLAY_EDGE_PX = 2560;
 export const THUMB_EDGE_PX = 480;
+/** The workshop logo: one image of at most 2 MB (UploadThing's "2MB"), kept at most 512 px on its long side. */
+export const MAX_LOGO_BYTES = 2 * 1024 * 1024;
+export const LOGO_EDGE_PX = 512;
 
 export function formatBytes(bytes: number): string {
   if (bytes < 1024) return `${bytes} bytes`;
@@ -27,19 +30,32 @@ export interface ClaimedFile {
   type: string;
 }
 
+/** What one upload route takes: how many files, how big, and what a person calls one of them. */
+export interface UploadLimits {
+  maxFiles: number;
+  maxBytes: number;
+  /** "photo"; "image" for the logo. */
+  noun: string;
+}
+
+export const PHOTO_UPLOAD_LIMITS: UploadLimits = { maxFiles: MAX_PHOTOS_PER_UPLOAD, maxBytes: MAX_PHOTO_BYTES, noun: "photo" };
+export const LOGO_UPLOAD_LIMITS: UploadLimits = { maxFiles: 1, maxBytes: MAX_LOGO_BYTES, noun: "image" };
+
 /** What is wrong with a batch as the browser describes it (names, sizes, types), or null. */
-export function uploadBatchProblem(files: readonly ClaimedFile[]): { path: string; message: string } | null {
-  if (files.length === 0) return { path: "files", message: "Choose at least one photo." };
-  if (files.length > MAX_PHOTOS_PER_UPLOAD) {
-    return { path: "files", message: `At most ${MAX_PHOTOS_PER_UPLOAD} photos per upload (you chose ${files.length}).` };
+export function uploadBatchProblem(files: readonly ClaimedFile[], limits: UploadLimits = PHOTO_UPLOAD_LIMITS): { path: string; message: string } | null {
+  const { maxFiles, maxBytes, noun } = limits;
+  if (files.length === 0) return { path: "files", message: `Choose ${maxFiles === 1 ? "an" : "at least one"} ${noun}.` };
+  if (files.length > maxFiles) {
+    const message = maxFiles === 1 ? `Choose one ${noun} (you chose ${files.length}).` : `At most ${maxFiles} ${noun}s per upload (you chose ${files.length}).`;
+    return { path: "files", message };
   }
   for (const [i, f] of files.entries()) {
-    if (f.size > MAX_PHOTO_BYTES) {
-      return { path: `files.${i}`, message: `${f.name} is ${formatBytes(f.size)}; each photo may be at most ${formatBytes(MAX_PHOTO_BYTES)}.` };
+    if (f.size > maxBytes) {
+      return { path: `files.${i}`, message: `${f.name} is ${formatBytes(f.size)}; ${maxFiles === 1 ? `the ${noun}` : `each ${noun}`} may be at most ${formatBytes(maxBytes)}.` };
     }
     if (f.size === 0) return { path: `files.${i}`, message: `${f.name} is empty.` };
     if (!(ACCEPTED_MIME_TYPES as readonly string[]).includes(f.type)) {
-      return { path: `files.${i}`, message: `${f.name} is not a JPEG, PNG, WebP or AVIF photo.` };
+      return { path: `files.${i}`, message: `${f.name} is not a JPEG, PNG, WebP or AVIF ${noun}.` };
     }
   }
   return null;

@@ -1,5 +1,6 @@
 // What the commission routes answer: the only shapes that leave lib/data for commissions, so a
 // new column cannot leak by accident.
+import type { MissingGuard } from "@/lib/workflow/machine";
 
 export interface PersonRef {
   id: number;
@@ -48,6 +49,8 @@ export interface TransitionOption {
   allowed: boolean;
   reason: string | null;
   missing: string[];
+  /** Which guard each line of `missing` is (same order): the page links to the tab that settles it. */
+  missingGuards: MissingGuard[];
 }
 
 export interface CommissionDetail extends CommissionSummary {

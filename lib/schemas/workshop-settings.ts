@@ -55,6 +55,6 @@ export interface WorkshopSettingsOut {
   buildStages: Array<{ key: string; label: string }>;
   requireStageSignoff: boolean;
   emailSenderName: string | null;
-  /** The logo's file key from the photo pipeline; null until one is uploaded. */
-  logoFileKey: string | null;
+  /** Where the logo is served to members (the authorised logo route); null until one is uploaded. */
+  logoUrl: string | null;
 }

@@ -66,6 +66,9 @@ export interface PlannedTransition {
   needsOwnerSignoff: boolean;
 }
 
+/** What a guard waits for: the client's approval, the deposit, the signed setup sheet, the balance. */
+export type MissingGuard = "spec_approval" | "deposit" | "setup_sheet" | "balance";
+
 export interface RefusedTransition {
   ok: false;
   /** "forbidden": this person may not; "conflict": nobody may right now (409). */
@@ -73,14 +76,16 @@ export interface RefusedTransition {
   reason: string;
   /** What is missing, one line each, when a guard refused. */
   missing?: string[];
+  /** The guard behind each line of `missing`, in the same order (pages link to where it is fixed). */
+  missingGuards?: MissingGuard[];
 }
 
 export type TransitionResult = PlannedTransition | RefusedTransition;
 
 const isClosed = (stage: string) => stage === DELIVERED || stage === CANCELLED;
 
-function refuse(kind: RefusedTransition["kind"], reason: string, missing?: string[]): RefusedTransition {
-  return missing ? { ok: false, kind, reason, missing } : { ok: false, kind, reason };
+function refuse(kind: RefusedTransition["kind"], reason: string, missing?: Array<{ guard: MissingGuard; text: string }>): RefusedTransition {
+  return missing ? { ok: false, kind, reason, missing: missing.map((m) => m.text), missingGuards: missing.map((m) => m.guard) } : { ok: false, kind, reason };
 }
 
 /** Who may move a commission forward out of `stage`. */
@@ -93,17 +98,18 @@ function mayAdvance(stage: string, actor: Actor, template: readonly BuildStage[]
 }
 
 /** Guards for leaving `from` forward; empty when nothing is missing. */
-function missingToLeave(from: string, facts: GuardFacts): string[] {
-  const missing: string[] = [];
+function missingToLeave(from: string, facts: GuardFacts): Array<{ guard: MissingGuard; text: string }> {
+  const missing: Array<{ guard: MissingGuard; text: string }> = [];
+  const add = (guard: MissingGuard, text: string) => missing.push({ guard, text });
   if (from === SPEC) {
-    if (!facts.approvedSpec) missing.push("The client has not approved a spec version yet.");
-    else if (facts.approvedSpec.hasErrors) missing.push("The approved spec version has errors; draft a corrected version.");
-    if (facts.newerUnapprovedSpec) missing.push("A newer spec version is waiting for the client's approval.");
+    if (!facts.approvedSpec) add("spec_approval", "The client has not approved a spec version yet.");
+    else if (facts.approvedSpec.hasErrors) add("spec_approval", "The approved spec version has errors; draft a corrected version.");
+    if (facts.newerUnapprovedSpec) add("spec_approval", "A newer spec version is waiting for the client's approval.");
   }
-  if (from === DEPOSIT && !facts.depositPaid) missing.push("The deposit has not been paid.");
+  if (from === DEPOSIT && !facts.depositPaid) add("deposit", "The deposit has not been paid.");
   if (from === FINAL_SETUP) {
-    if (!facts.setupSheetSigned) missing.push("The final setup sheet is not filled in and signed.");
-    if (!facts.balancePaid) missing.push("The balance has not been paid.");
+    if (!facts.setupSheetSigned) add("setup_sheet", "The final setup sheet is not filled in and signed.");
+    if (!facts.balancePaid) add("balance", "The balance has not been paid.");
   }
   return missing;
 }
@@ -133,7 +139,7 @@ export function planTransition(state: CommissionState, action: TransitionAction,
         return refuse("forbidden", actor.role === "builder" ? "Only the builder assigned to this commission or the owner can move it on." : "You cannot move this commission on.");
       }
       const missing = missingToLeave(stage, facts);
-      if (missing.length) return refuse("conflict", `It cannot leave ${label(stage)} yet: ${missing.join(" ")}`, missing);
+      if (missing.length) return refuse("conflict", `It cannot leave ${label(stage)} yet: ${missing.map((m) => m.text).join(" ")}`, missing);
       // Sign-off applies to moves between build stages and out of the last one, made by a builder.
       const intoOrWithinBuild = isBuildStage(stage, facts.template) || isBuildStage(to, facts.template);
       const needsOwnerSignoff = facts.requireOwnerSignoff && actor.role !== "owner" && intoOrWithinBuild && stage !== DEPOSIT;

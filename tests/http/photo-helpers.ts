@@ -3,6 +3,7 @@
 import { genUploader } from "uploadthing/client";
 import type { PhotoFileRouter } from "@/lib/photos/file-router";
 import type { PhotoUploadResult } from "@/lib/schemas/photo";
+import type { LogoUploadResult } from "@/lib/schemas/workshop-logo";
 import { FetchXMLHttpRequest } from "../fakes/helpers/xhr-over-fetch";
 import { testDb } from "../setup/test-db";
 import { appUrl } from "./app-url";
@@ -42,9 +43,20 @@ export async function addPhoto(s: HttpSession, ws: TestWorkshop, commissionId: n
   return up.serverData.photoId;
 }
 
+/** Uploads a workshop logo as `s` through the logo route (throws the client's UploadThingError when refused). */
+export async function uploadLogo(s: HttpSession, slug: string, file: File): Promise<{ key: string; serverData: LogoUploadResult }> {
+  const [r] = await uploader().uploadFiles("workshopLogo", { files: [file], input: { workshop: slug }, headers: { cookie: cookieHeader(s) } });
+  return { key: r!.key, serverData: r!.serverData as LogoUploadResult };
+}
+
 /** The route's first request (upload URLs) sent by hand, to see the status and body the SDK answers. */
-export async function askToUpload(s: HttpSession | null, input: unknown, files: Array<{ name: string; size: number; type: string }>): Promise<{ status: number; body: any }> {
-  const res = await fetch(appUrl("/api/uploadthing?actionType=upload&slug=stagePhoto"), {
+export async function askToUpload(
+  s: HttpSession | null,
+  input: unknown,
+  files: Array<{ name: string; size: number; type: string }>,
+  route: "stagePhoto" | "workshopLogo" = "stagePhoto",
+): Promise<{ status: number; body: any }> {
+  const res = await fetch(appUrl(`/api/uploadthing?actionType=upload&slug=${route}`), {
     method: "POST",
     headers: { "content-type": "application/json", "x-uploadthing-version": "7.7.4", ...(s ? { cookie: cookieHeader(s) } : {}) },
     body: JSON.stringify({ input, files: files.map((f) => ({ ...f, lastModified: Date.now() })) }),

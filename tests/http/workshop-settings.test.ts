@@ -41,7 +41,7 @@ describe("who may see and change settings", () => {
       buildStages: DEFAULT_BUILD_STAGES,
       requireStageSignoff: false,
       emailSenderName: null,
-      logoFileKey: null,
+      logoUrl: null,
     });
   });
 

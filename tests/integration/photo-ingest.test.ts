@@ -4,32 +4,19 @@
 // row is left without its files and no file is left without its row.
 import { UTFile } from "uploadthing/server";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { startUploadthingFake, type UploadthingFake } from "@/fakes/uploadthing/app";
-import { testOptions } from "@/fakes/uploadthing/options";
 import { ingestUploadedPhoto, type PhotoUploadMetadata } from "@/lib/photos/upload-flow";
-import { createUtApi, uploadthingSettings } from "@/lib/services/uploadthing";
 import { createWorkshopWithMembers, type TestMember, type TestWorkshop } from "../http/fixtures";
 import { closeTestDb, testDb } from "../setup/test-db";
 import { jpegWithGps } from "../support/photos";
+import { useBreakableUploadsFake } from "./uploads-fake";
 
-let fake: UploadthingFake;
+const uploads = useBreakableUploadsFake();
 let ws: TestWorkshop;
 
-const settings = () => uploadthingSettings({ ...process.env, UPLOADTHING_INGEST_URL: fake.url, UPLOADTHING_API_URL: fake.url, UPLOADTHING_UFS_HOST: `localhost:${fake.port}` });
-
 beforeAll(async () => {
-  const env = uploadthingSettings();
-  fake = await startUploadthingFake(testOptions({ apiKey: env.apiKey, appId: env.appId }));
-  // The app's shared UTApi reads these on first use: point it at this test's fake.
-  process.env.UPLOADTHING_INGEST_URL = fake.url;
-  process.env.UPLOADTHING_API_URL = fake.url;
-  process.env.UPLOADTHING_UFS_HOST = `localhost:${fake.port}`;
   ws = await createWorkshopWithMembers();
 });
-afterAll(async () => {
-  await fake?.close();
-  await closeTestDb();
-});
+afterAll(closeTestDb);
 
 let seq = 0;
 async function commission(stage: string): Promise<number> {
@@ -50,13 +37,13 @@ async function commission(stage: string): Promise<number> {
 /** An original as the browser would have put it at the service: private, with GPS in its EXIF. */
 async function storedOriginal(name = "original.jpg"): Promise<{ key: string; name: string; size: number }> {
   const bytes = await jpegWithGps(400, 300, { seed: ++seq });
-  const up = await createUtApi(settings()).uploadFiles(new UTFile([new Uint8Array(bytes)], name, { type: "image/jpeg" }), { acl: "private" });
+  const up = await uploads.utapi().uploadFiles(new UTFile([new Uint8Array(bytes)], name, { type: "image/jpeg" }), { acl: "private" });
   if (!up.data) throw new Error(`could not store the original: ${JSON.stringify(up.error)}`);
   return { key: up.data.key, name, size: bytes.length };
 }
 
 const meta = (who: TestMember, commissionId: number): PhotoUploadMetadata => ({ slug: ws.slug, userId: who.userId, commissionId, caption: "Ingest test" });
-const storedKeys = () => Object.keys(fake.ctx.state.files);
+const storedKeys = () => uploads.storedKeys();
 const rowsFor = (commissionId: number) => testDb()("photos").where({ commission_id: commissionId }).select("id", "source_key", "file_key", "thumb_key");
 
 describe("processing an uploaded photo", () => {
@@ -68,7 +55,7 @@ describe("processing an uploaded photo", () => {
     const [row] = await rowsFor(c);
     expect(storedKeys().sort()).toEqual([row.file_key, row.thumb_key].sort());
     expect(storedKeys()).not.toContain(file.key);
-    await createUtApi(settings()).deleteFiles(storedKeys());
+    await uploads.utapi().deleteFiles(storedKeys());
   });
 
   it("treats a second callback for the same upload as the first: one row", async () => {
@@ -78,15 +65,15 @@ describe("processing an uploaded photo", () => {
     const again = await ingestUploadedPhoto(meta(ws.builder, c), file);
     expect(again).toEqual(first);
     expect(await rowsFor(c)).toHaveLength(1);
-    await createUtApi(settings()).deleteFiles(storedKeys());
+    await uploads.utapi().deleteFiles(storedKeys());
   });
 
   it("leaves nothing behind when the service fails while the versions are being stored", async () => {
     const c = await commission("timber");
     const file = await storedOriginal();
-    const write = fake.ctx.bytes.write.bind(fake.ctx.bytes);
+    const write = uploads.fake.ctx.bytes.write.bind(uploads.fake.ctx.bytes);
     let writes = 0;
-    fake.ctx.bytes.write = (key, bytes, append) => {
+    uploads.fake.ctx.bytes.write = (key, bytes, append) => {
       if (++writes === 2) throw new Error("disk full (test)"); // the second version fails, the first got in
       write(key, bytes, append);
     };
@@ -94,7 +81,7 @@ describe("processing an uploaded photo", () => {
       const result = await ingestUploadedPhoto(meta(ws.builder, c), file);
       expect(result).toEqual({ ok: false, code: "unavailable", message: "The photo store is not reachable right now. Nothing was saved; try again in a moment." });
     } finally {
-      fake.ctx.bytes.write = write;
+      uploads.fake.ctx.bytes.write = write;
     }
     expect(writes).toBe(2);
     expect(await rowsFor(c)).toEqual([]);
@@ -122,7 +109,7 @@ describe("processing an uploaded photo", () => {
 
   it("refuses bytes that are not an image, deleting the upload", async () => {
     const c = await commission("timber");
-    const up = await createUtApi(settings()).uploadFiles(new UTFile([new TextEncoder().encode("not a photo")], "pickup.jpg", { type: "image/jpeg" }), { acl: "private" });
+    const up = await uploads.utapi().uploadFiles(new UTFile([new TextEncoder().encode("not a photo")], "pickup.jpg", { type: "image/jpeg" }), { acl: "private" });
     const result = await ingestUploadedPhoto(meta(ws.builder, c), { key: up.data!.key, name: "pickup.jpg", size: 11 });
     expect(result).toMatchObject({ ok: false, code: "validation_failed" });
     expect(storedKeys()).toEqual([]);

@@ -51,7 +51,7 @@ describe("advance", () => {
 
   it("keeps the spec stage until a spec version without errors is approved", () => {
     const none = planTransition(at(SPEC), { kind: "advance" }, { ...allMet, approvedSpec: null }, builder);
-    expect(none).toMatchObject({ ok: false, kind: "conflict", missing: ["The client has not approved a spec version yet."] });
+    expect(none).toMatchObject({ ok: false, kind: "conflict", missing: ["The client has not approved a spec version yet."], missingGuards: ["spec_approval"] });
     const withErrors = planTransition(at(SPEC), { kind: "advance" }, { ...allMet, approvedSpec: { id: 2, hasErrors: true } }, builder);
     expect(withErrors.ok).toBe(false);
     const newer = planTransition(at(SPEC), { kind: "advance" }, { ...allMet, newerUnapprovedSpec: true }, builder);
@@ -62,7 +62,7 @@ describe("advance", () => {
   it("keeps the deposit stage until the deposit is paid; the bookkeeper may move it on then", () => {
     const unpaid = { ...allMet, depositPaid: false };
     const r = planTransition(at(DEPOSIT), { kind: "advance" }, unpaid, owner);
-    expect(r).toMatchObject({ ok: false, kind: "conflict" });
+    expect(r).toMatchObject({ ok: false, kind: "conflict", missingGuards: ["deposit"] });
     if (!r.ok) expect(r.reason).toMatch(/deposit has not been paid/);
     expect(planTransition(at(DEPOSIT), { kind: "advance" }, allMet, bookkeeper)).toMatchObject({ ok: true, to: firstBuild });
     expect(planTransition(at(firstBuild), { kind: "advance" }, allMet, bookkeeper)).toMatchObject({ ok: false, kind: "forbidden" });
@@ -74,6 +74,7 @@ describe("advance", () => {
       ok: false,
       kind: "conflict",
       missing: ["The final setup sheet is not filled in and signed.", "The balance has not been paid."],
+      missingGuards: ["setup_sheet", "balance"],
     });
     expect(planTransition(at(FINAL_SETUP), { kind: "advance" }, allMet, builder)).toMatchObject({ ok: true, to: DELIVERED });
   });

@@ -2,12 +2,14 @@ import type { Metadata } from "next";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";
 import { getWorkshopSettings, toSettingsOut } from "@/lib/data/workshop-settings";
+import { LogoForm } from "./logo-form";
 import { SettingsForm } from "./settings-form";
 import { StageTemplateForm } from "./stage-template-form";
 
 export const metadata: Metadata = { title: "Settings" };
 
-// The owner's settings for the whole workshop (403 for every other role). Changes go to the audit log.
+// The owner's settings for the whole workshop (403 for every other role), the logo among them (uploaded
+// through the photo pipeline's `workshopLogo` route). Changes go to the audit log.
 export default async function SettingsPage({ params }: { params: Promise<{ workshop: string }> }) {
   const { workshop: slug } = await params;
   const ctx = await requireWorkshopPage(slug, "settings.manage", `/${slug}/settings`);
@@ -18,12 +20,9 @@ export default async function SettingsPage({ params }: { params: Promise<{ works
         <CardHeader title="Workshop" subtitle="Name, units, money and e-mail" />
         <CardBody className="space-y-6">
           <SettingsForm slug={slug} settings={settings} />
-          <div className="border-t border-spruce-100 pt-4">
+          <div className="space-y-3 border-t border-spruce-100 pt-4">
             <h3 className="text-sm font-semibold">Logo</h3>
-            <p className="text-xs text-graphite-500">
-              {settings.logoFileKey ? "A logo is on file." : "No logo yet."} Uploading a logo comes with photo uploads; until then e-mails and
-              pages show the workshop&apos;s name.
-            </p>
+            <LogoForm slug={slug} logoUrl={settings.logoUrl} />
           </div>
         </CardBody>
       </Card>

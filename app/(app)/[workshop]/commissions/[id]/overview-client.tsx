@@ -1,15 +1,17 @@
 "use client";
 
-// The overview tab: where the commission stands and what can be done next.
+// The overview tab: where the commission stands and what can be done next, with the stage photos in
+// the timeline, the money and the signed setup sheet, each linking to its own tab.
 import Link from "next/link";
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import { CommentsThread } from "@/components/commissions/comments-thread";
 import { EditCommissionForm } from "@/components/commissions/edit-commission-form";
-import { formatMinor, formatPrice } from "@/components/commissions/format";
+import { MoneyPanel } from "@/components/commissions/money-panel";
 import { useCommission } from "@/components/commissions/queries";
 import { Failed, Loading } from "@/components/commissions/query-states";
+import { SetupSummaryPanel, type SignedSetupSummary } from "@/components/commissions/setup-summary-panel";
 import { StageLine } from "@/components/commissions/stage-line";
-import { StageMoves } from "@/components/commissions/stage-moves";
+import { StageMoves, type FixLinks } from "@/components/commissions/stage-moves";
 import { StageTimeline } from "@/components/commissions/stage-timeline";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
@@ -25,6 +27,20 @@ export interface OverviewProps {
   isOwner: boolean;
   canWrite: boolean;
   canSignOff: boolean;
+  /** The commission's tabs the caller may open (null: not theirs to see). */
+  tabs: { spec: string | null; payments: string | null; photos: string | null; setup: string | null };
+  /** Stage photos as the server rendered them for this caller, in the order of the stage line. */
+  photos: Array<{ stage: string; strip: ReactNode }>;
+  setup: SignedSetupSummary | null;
+}
+
+/** Where each thing a move waits for is settled, among the tabs the caller may open. */
+function fixLinks(tabs: OverviewProps["tabs"]): FixLinks {
+  const links: FixLinks = {};
+  if (tabs.spec) links.spec_approval = { href: tabs.spec, label: "Open the spec" };
+  if (tabs.payments) links.deposit = links.balance = { href: tabs.payments, label: "Open the Payments tab" };
+  if (tabs.setup) links.setup_sheet = { href: tabs.setup, label: "Open the setup sheet" };
+  return links;
 }
 
 export function OverviewClient(props: OverviewProps) {
@@ -49,13 +65,13 @@ export function OverviewClient(props: OverviewProps) {
           <CardHeader title="Stage" subtitle={props.isClient ? "Where your instrument is in the build" : "The workshop's stage line"} />
           <CardBody className="space-y-5">
             <StageLine commission={c} />
-            {c.transitions.length > 0 ? <StageMoves slug={slug} commission={c} /> : null}
+            {c.transitions.length > 0 ? <StageMoves slug={slug} commission={c} fixLinks={fixLinks(props.tabs)} /> : null}
           </CardBody>
         </Card>
         <Card>
-          <CardHeader title="Timeline" subtitle="Newest first" />
+          <CardHeader title="Timeline" subtitle={props.photos.length ? "Newest first, with each stage's photos" : "Newest first"} />
           <CardBody>
-            <StageTimeline slug={slug} commissionId={id} canSignOff={props.canSignOff} showSignoff={!props.isClient} />
+            <StageTimeline slug={slug} commissionId={id} canSignOff={props.canSignOff} showSignoff={!props.isClient} photos={props.photos} />
           </CardBody>
         </Card>
         <Card>
@@ -67,7 +83,8 @@ export function OverviewClient(props: OverviewProps) {
       </div>
       <div className="min-w-0 space-y-5">
         <SpecPanel slug={slug} c={c} isClient={props.isClient} />
-        {c.money ? <MoneyPanel c={c} /> : null}
+        {c.money ? <MoneyPanel c={c} paymentsHref={props.tabs.payments} isClient={props.isClient} /> : null}
+        {props.setup ? <SetupSummaryPanel setup={props.setup} setupHref={props.tabs.setup} /> : null}
         <DetailsPanel {...props} c={c} />
       </div>
     </div>
@@ -94,36 +111,6 @@ function SpecPanel({ slug, c, isClient }: { slug: string; c: CommissionDetail; i
         <Link href={`/${slug}/commissions/${c.id}/spec`} className="inline-block font-semibold text-rosewood-700 underline">
           {isClient ? (waitingForClient ? "Review and approve the spec" : "See the spec") : "Open the spec"}
         </Link>
-      </CardBody>
-    </Card>
-  );
-}
-
-function MoneyPanel({ c }: { c: CommissionDetail }) {
-  const m = c.money!;
-  const p = c.payments;
-  return (
-    <Card>
-      <CardHeader title="Price" />
-      <CardBody>
-        <dl className="grid grid-cols-2 gap-2 text-sm">
-          <dt className="text-graphite-500">Price</dt>
-          <dd className="text-right font-mono" data-testid="price">
-            {m.priceMinor > 0 ? formatPrice(m, "priceMinor") : "Not set yet"}
-          </dd>
-          <dt className="text-graphite-500">Deposit ({m.depositPercent} %)</dt>
-          <dd className="text-right font-mono">{formatPrice(m, "depositMinor")}</dd>
-          {p ? (
-            <>
-              <dt className="text-graphite-500">Paid so far</dt>
-              <dd className="text-right font-mono">{formatMinor(p.paidMinor - p.refundedMinor, m.currency)}</dd>
-              <dt className="text-graphite-500">Deposit</dt>
-              <dd className="text-right">{p.depositPaid ? <Badge tone="success">paid</Badge> : <Badge tone="warning">not paid</Badge>}</dd>
-              <dt className="text-graphite-500">Balance</dt>
-              <dd className="text-right">{p.balancePaid ? <Badge tone="success">paid</Badge> : <Badge>open</Badge>}</dd>
-            </>
-          ) : null}
-        </dl>
       </CardBody>
     </Card>
   );

@@ -33,6 +33,7 @@ async function load(slug: string, id: string) {
 
 // The commission's money: its deposit and balance, every payment and refund. The client pays here
 // by card; the owner and the bookkeeper record other payments and refund; builders see no money (403).
+// The commission's header and tabs come from the layout.
 export default async function CommissionPaymentsPage({ params, searchParams }: { params: Params; searchParams: Search }) {
   const { workshop: slug, id } = await params;
   const { ctx, data } = await load(slug, id);
@@ -44,21 +45,23 @@ export default async function CommissionPaymentsPage({ params, searchParams }: {
     p.kind !== "refund" && p.refundableMinor > 0 ? [{ id: p.id, kind: p.kind, method: p.method, amountMinor: p.amountMinor, refundableMinor: p.refundableMinor, currency: p.currency }] : [],
   );
   const nextDue = invoices.find((i) => i.outstandingMinor > 0)?.kind ?? "balance";
+  // The client's Pay buttons sit above the table, where a phone shows them without scrolling sideways.
+  const payable = can.pay ? invoices.filter((i) => i.payable) : [];
 
   return (
     <div className="space-y-6">
       {returned && can.pay ? <CheckoutReturn outcome={returned} confirming={confirming} /> : null}
       <Card>
-        <CardHeader
-          title={`Payments · ${c.number} ${c.title}`}
-          subtitle={`Stage: ${c.stageLabel} · Price ${fmt(c.priceMinor, c.currency)}`}
-        />
+        <CardHeader title="Invoices" subtitle={`Price ${fmt(c.priceMinor, c.currency)}, deposit ${c.depositPercent} % of it`} />
         <CardBody className="space-y-4">
-          <InvoiceTable
-            invoices={invoices}
-            depositPercent={c.depositPercent}
-            action={can.pay ? (i) => (i.payable ? <PayButton slug={slug} commissionId={c.id} kind={i.kind} label={`Pay ${INVOICE_LABEL[i.kind].toLowerCase()} ${fmt(i.outstandingMinor, i.currency)}`} /> : null) : undefined}
-          />
+          {payable.length ? (
+            <div className="flex flex-wrap items-start gap-3" data-testid="pay-now">
+              {payable.map((i) => (
+                <PayButton key={i.kind} slug={slug} commissionId={c.id} kind={i.kind} label={`Pay ${INVOICE_LABEL[i.kind].toLowerCase()} ${fmt(i.outstandingMinor, i.currency)}`} />
+              ))}
+            </div>
+          ) : null}
+          <InvoiceTable invoices={invoices} depositPercent={c.depositPercent} />
           <dl className="grid gap-2 text-sm sm:grid-cols-4">
             <div>
               <dt className="text-graphite-500">Paid</dt>

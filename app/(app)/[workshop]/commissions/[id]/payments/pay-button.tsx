@@ -24,7 +24,7 @@ export function PayButton({ slug, commissionId, kind, label }: { slug: string; c
   }
 
   return (
-    <div className="flex flex-col items-end gap-2">
+    <div className="flex flex-col items-start gap-2">
       <Button onClick={pay} busy={busy}>
         {label}
       </Button>

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { StagePhotos } from "@/components/photos/stage-photos";
+import { Alert } from "@/components/ui/alert";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";
 import { getCommissionSummary } from "@/lib/data/commissions";
@@ -25,7 +25,8 @@ async function uploadState(...args: Parameters<typeof checkPhotoUpload>): Promis
 }
 
 // The commission's photos by stage, for everyone who can see the commission; the builder and the
-// owner add stage photos here, the client reference pictures while the spec is open.
+// owner add stage photos here, the client reference pictures while the spec is open. The header and
+// tabs come from the commission's layout.
 export default async function CommissionPhotosPage({ params }: { params: Promise<{ workshop: string; id: string }> }) {
   const { workshop: slug, id } = await params;
   const ctx = await requireWorkshopPage(slug, "photo.read", `/${slug}/commissions/${id}/photos`);
@@ -45,16 +46,6 @@ export default async function CommissionPhotosPage({ params }: { params: Promise
 
   return (
     <div className="space-y-6">
-      <div>
-        <p className="text-xs font-semibold uppercase tracking-wider text-graphite-500">
-          <Link href={`/${slug}/commissions/${commission.id}`} className="hover:text-rosewood-700">
-            {commission.number}
-          </Link>{" "}
-          · now at {commission.stageLabel}
-        </p>
-        <h2 className="text-xl font-semibold">Photos: {commission.title}</h2>
-      </div>
-
       {upload && "stageLabel" in upload ? (
         <Card>
           <CardHeader
@@ -66,7 +57,7 @@ export default async function CommissionPhotosPage({ params }: { params: Promise
           </CardBody>
         </Card>
       ) : upload ? (
-        <p className="rounded-chip border border-spruce-200 bg-white px-3 py-2 text-sm text-graphite-700">{upload.blocker}</p>
+        <Alert tone="info">{upload.blocker}</Alert>
       ) : null}
 
       <Card>

@@ -2,9 +2,10 @@
 
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
-import type { UploadThingError } from "uploadthing/server";
 import { lazySchema } from "@/components/forms/lazy-schema";
-import { useUploadThing } from "@/components/photos/upload-helpers";
+import { SERVICE_DOWN } from "@/components/photos/upload-errors";
+import { UploadProgress } from "@/components/photos/upload-progress";
+import { useUploadPipeline } from "@/components/photos/use-upload-pipeline";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
@@ -14,16 +15,7 @@ import type { PhotoUploadResult } from "@/lib/schemas/photo";
 
 const photoCaptionSchema = lazySchema(() => import("@/lib/schemas/photo").then((m) => m.photoCaptionSchema));
 
-type Phase = "idle" | "sending" | "processing" | "done" | "failed";
-
-const SERVICE_DOWN = "The photo service could not be reached, so the upload did not go through. Nothing was saved; try again in a moment.";
-
-/** A message a person can act on, from whatever the upload client reports. */
-function uploadErrorMessage(err: UploadThingError): string {
-  // The browser's PUT to the service failed, or the service itself answered with an error.
-  if (err.code === "UPLOAD_FAILED" || err.code === "INTERNAL_CLIENT_ERROR") return SERVICE_DOWN;
-  return err.message || "The upload did not go through. Nothing was saved; try again.";
-}
+const PROCESSING = "Removing location data and making thumbnails…";
 
 /** Caption, files, and a progress bar: bytes going up first, then the server preparing the photos. */
 export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: string; commissionId: number; stageLabel: string }) {
@@ -32,22 +24,8 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
   const [files, setFiles] = useState<File[]>([]);
   const [caption, setCaption] = useState("");
   const [errors, setErrors] = useState<{ caption?: string; files?: string }>({});
-  const [phase, setPhase] = useState<Phase>("idle");
-  const [progress, setProgress] = useState(0);
   const [notice, setNotice] = useState<{ tone: "success" | "error"; text: string } | null>(null);
-  const failure = useRef<string | null>(null);
-
-  const { startUpload, isUploading } = useUploadThing("stagePhoto", {
-    uploadProgressGranularity: "fine",
-    onUploadBegin: () => setPhase("sending"),
-    onUploadProgress: (p) => {
-      setProgress(p);
-      if (p >= 100) setPhase("processing");
-    },
-    onUploadError: (err) => {
-      failure.current = uploadErrorMessage(err);
-    },
-  });
+  const { startUpload, busy, phase, setPhase, progress, setProgress, failure, begin } = useUploadPipeline("stagePhoto");
 
   async function submit(e: FormEvent) {
     e.preventDefault();
@@ -58,9 +36,7 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
     setErrors(next);
     if (next.caption || next.files) return;
 
-    failure.current = null;
-    setProgress(0);
-    setPhase("sending");
+    begin();
     const results = await startUpload(files, { workshop: slug, commissionId, caption: checkedCaption.data! });
     if (!results) {
       setPhase("failed");
@@ -86,9 +62,6 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
     }
   }
 
-  const busy = isUploading || phase === "sending" || phase === "processing";
-  const status =
-    phase === "sending" ? `Uploading… ${Math.round(progress)} %` : phase === "processing" ? "Removing location data and making thumbnails…" : phase === "done" ? "Uploaded" : phase === "failed" ? "Not uploaded" : "";
 
   return (
     <form onSubmit={submit} noValidate className="space-y-4" aria-label="Photo upload">
@@ -117,24 +90,7 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
           ))}
         </ul>
       ) : null}
-      {phase !== "idle" ? (
-        <div className="space-y-1">
-          <div
-            role="progressbar"
-            aria-label="Upload progress"
-            aria-valuemin={0}
-            aria-valuemax={100}
-            aria-valuenow={Math.round(progress)}
-            aria-valuetext={status}
-            className="h-2.5 w-full overflow-hidden rounded-full bg-spruce-100"
-          >
-            <div className={phase === "failed" ? "h-full bg-ember-500" : "h-full bg-rosewood-700 transition-[width]"} style={{ width: `${progress}%` }} />
-          </div>
-          <p className="text-xs text-graphite-600" aria-live="polite">
-            {status}
-          </p>
-        </div>
-      ) : null}
+      <UploadProgress phase={phase} progress={progress} processing={PROCESSING} />
       <Button type="submit" busy={busy}>
         Upload
       </Button>

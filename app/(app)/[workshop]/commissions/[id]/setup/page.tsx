@@ -6,7 +6,6 @@ import { PrintoutsCard } from "@/components/setup/printouts-card";
 import { SetupChecks } from "@/components/setup/setup-checks";
 import { SetupReadout, StatusBadge } from "@/components/setup/setup-readout";
 import { Alert } from "@/components/ui/alert";
-import { Badge } from "@/components/ui/badge";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";
 import { getSetupSheetView } from "@/lib/data/setup-sheets";
@@ -22,7 +21,7 @@ type Props = { params: Promise<{ workshop: string; id: string }>; searchParams: 
 
 // The commission's final setup: the builder fills in and signs the sheet, the owner countersigns
 // when the workshop asks for it, the client reads the signed sheet; everyone who may see the
-// commission downloads the printouts.
+// commission downloads the printouts. The header and tabs come from the commission's layout.
 export default async function SetupPage({ params, searchParams }: Props) {
   const { workshop: slug, id: rawId } = await params;
   const ctx = await requireWorkshopPage(slug, "setup.read", `/${slug}/commissions/${rawId}/setup`);
@@ -37,18 +36,11 @@ export default async function SetupPage({ params, searchParams }: Props) {
 
   return (
     <div className="space-y-6">
-      <header className="flex flex-wrap items-center gap-3">
-        <h2 className="text-xl font-semibold">
-          Final setup: <span className="font-mono">{view.commission.number}</span> {view.commission.title}
-        </h2>
-        <Badge tone="accent">{view.commission.stageLabel}</Badge>
-        {view.sheet ? <StatusBadge status={view.sheet.status} /> : null}
-      </header>
-
       <Card>
         <CardHeader
           title={view.can.edit ? `Setup sheet${view.sheet ? `, revision ${view.sheet.revision}` : ""}` : "Setup sheet"}
           subtitle={view.spec ? `Measured against the approved spec, version ${view.spec.version}` : "No approved spec yet"}
+          action={view.sheet ? <StatusBadge status={view.sheet.status} /> : null}
         />
         <CardBody className="space-y-4">
           {view.lockedReason && !view.can.edit ? <Alert tone="info">{view.lockedReason}</Alert> : null}
