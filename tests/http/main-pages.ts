@@ -31,6 +31,7 @@ export async function prepareMainPages(): Promise<MainPagesFixture> {
   const sessions = await signInRoles(ws);
   const drafting = await openCommission(sessions.owner, ws, { title: "Spec being drafted" });
   const inSetup = await commissionInFinalSetup(sessions, ws);
+  const thisMonth = new Date().toISOString().slice(0, 7); // YYYY-MM, UTC
   const c = (id: number, tab = "") => `/${ws.slug}/commissions/${id}${tab}`;
   const pages: MainPage[] = [
     { label: "landing", path: "/", as: "anonymous" },
@@ -47,8 +48,15 @@ export async function prepareMainPages(): Promise<MainPagesFixture> {
     { label: "payments (owner: record, refund)", path: c(inSetup.id, "/payments"), as: "owner" },
     { label: "photos (builder: upload)", path: c(inSetup.id, "/photos"), as: "builder" },
     { label: "setup (builder: the sheet)", path: c(inSetup.id, "/setup"), as: "builder" },
+    { label: "new commission", path: `/${ws.slug}/commissions/new`, as: "owner" },
     { label: "overview", path: `/${ws.slug}/overview`, as: "owner" },
+    { label: "cohorts", path: `/${ws.slug}/cohorts`, as: "owner" },
     { label: "settings", path: `/${ws.slug}/settings`, as: "owner" },
+    { label: "setup ranges", path: `/${ws.slug}/setup`, as: "owner" },
+    { label: "books: ledger", path: `/${ws.slug}/books`, as: "bookkeeper" },
+    { label: "books: reconciliation", path: `/${ws.slug}/books/reconciliation`, as: "bookkeeper" },
+    { label: "books: a month", path: `/${ws.slug}/books/reconciliation/${thisMonth}`, as: "bookkeeper" },
+    { label: "books: summary", path: `/${ws.slug}/books/summary`, as: "bookkeeper" },
   ];
   const cookieOf = (v: Viewer) => (v === "anonymous" ? "" : [...sessions[v].cookies].map(([k, val]) => `${k}=${val}`).join("; "));
   return { ws, sessions, pages, cookieOf };

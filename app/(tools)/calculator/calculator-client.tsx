@@ -7,7 +7,7 @@ import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import { BuildResults } from "@/components/build-math/build-results";
 import { PresetPicker } from "@/components/build-math/preset-picker";
-import { SetupHelpers } from "@/components/build-math/setup-helpers";
+import { SetupHelpers } from "@/components/build-math/lazy-setup-helpers";
 import { SpecFormFields } from "@/components/build-math/spec-form";
 import { focusSpecField } from "@/components/build-math/spec-form-fields";
 import { UnitSwitch } from "@/components/build-math/unit-switch";

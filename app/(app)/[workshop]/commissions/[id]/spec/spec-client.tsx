@@ -7,7 +7,6 @@ import { commissionPaths } from "@/components/commissions/api-paths";
 import { useCommission, useSpecVersion, useSpecVersions } from "@/components/commissions/queries";
 import { Empty, Failed, Loading } from "@/components/commissions/query-states";
 import { SpecChanges } from "@/components/commissions/spec-changes";
-import { SpecVersionView } from "@/components/commissions/spec-version-view";
 import { SpecVersionsTable } from "@/components/commissions/spec-versions-table";
 import { useCommissionChange } from "@/components/commissions/use-commission-change";
 import { Alert } from "@/components/ui/alert";
@@ -17,7 +16,7 @@ import { Textarea } from "@/components/ui/input";
 import { errorMessage } from "@/lib/http/api-client";
 import type { LengthUnit } from "@/lib/lutherie/units";
 import type { SpecVersionSummary } from "@/lib/schemas/spec-version";
-import { ClientApproval, preloadSpecParts, SpecEditor } from "./lazy-parts";
+import { ClientApproval, preloadSpecParts, SpecEditor, SpecVersionView } from "./lazy-parts";
 
 export interface SpecClientProps {
   slug: string;
