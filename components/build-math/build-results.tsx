@@ -5,9 +5,8 @@
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import type { ComputeResult } from "@/lib/schemas/instrument-spec";
 import { forceUnitFor, formatForce, formatLengthIn } from "@/lib/lutherie/units";
-import { FretTable } from "./fret-table";
 import { IssueList } from "./issue-list";
-import { HarmonicsChart, TensionChart } from "./lazy-charts";
+import { FretTable, HarmonicsChart, TensionChart } from "./lazy-charts";
 import { PickupTable } from "./pickup-table";
 import { StringTable } from "./string-table";
 
