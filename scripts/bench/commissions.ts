@@ -16,9 +16,9 @@ export const BULK_COUNT = 20_000;
 const PASSWORD = "bench-commissions-2027"; // test database only
 export const LIST_QUERY = "stage=finish&sort=-updated&page=2&pageSize=50";
 
-/** The 20,000-commission workshop (made once, batch-inserted; reused while it holds that many). */
-export async function prepareBulkWorkshop(): Promise<BulkWorkshop> {
-  return createBulkCommissionWorkshop(benchDb(), { slug: BULK_SLUG, count: BULK_COUNT, passwordHash: await hashPassword(PASSWORD) });
+/** The 20,000-commission workshop, or another bulk one (made once, batch-inserted; reused while it holds that many). */
+export async function prepareBulkWorkshop(slug = BULK_SLUG, count = BULK_COUNT): Promise<BulkWorkshop> {
+  return createBulkCommissionWorkshop(benchDb(), { slug, count, passwordHash: await hashPassword(PASSWORD) });
 }
 
 /** The Cookie header of the bulk workshop's owner, signed in through the real credentials flow (TEST_APP_URL: pointTestHelpersAt). */

@@ -319,14 +319,17 @@ export function formatTable(header: string[], body: string[][]): string {
 /** The measured columns of a row (the goal and any extra column come after). */
 export const BENCH_COLUMNS = ["benchmark", "conns", "p50 ms", "p95 ms", "req/s", "vs floor", "server CPU ms/req", "DB statements/req", "failed"];
 
+/** A latency, or "none" when no answer came within a round. */
+const ms = (v: number) => (Number.isFinite(v) ? v.toFixed(1) : "none");
+
 export function benchCells(r: BenchRow): string[] {
   return [
     r.kind === "floor" ? `  floor: ${r.name}` : r.name,
     String(r.connections),
-    r.p50Ms.toFixed(1),
-    r.p95Ms.toFixed(1),
+    ms(r.p50Ms),
+    ms(r.p95Ms),
     r.rps.toFixed(0),
-    r.ratioToFloor === undefined ? "—" : `${(100 * r.ratioToFloor).toFixed(0)} %`,
+    r.ratioToFloor === undefined || !Number.isFinite(r.ratioToFloor) ? "—" : `${(100 * r.ratioToFloor).toFixed(0)} %`,
     r.cpuMsPerRequest.toFixed(2),
     r.statementsPerRequest.toFixed(1),
     String(r.unexpected),

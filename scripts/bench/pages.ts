@@ -1,5 +1,6 @@
-// The dashboard pages' benchmarks, on the 20,000-commission workshop (commissions.ts): the owner's
-// overview page and a commission's page, each as server-rendered HTML for the signed-in owner,
+// The dashboard pages' benchmarks on bulk workshops (commissions.ts): the owner's overview page (on
+// a workshop of 500 commissions) and a commission's page (in the 20,000-commission workshop), each
+// as server-rendered HTML for the signed-in owner,
 // against its floor, the same data functions as the workshop's owner with no session, membership
 // check or rendering (GET /api/bench/overview, GET /api/bench/commission-summary). Used by `npm run bench`.
 import type { BulkWorkshop } from "../../db/fixtures/bulk-commissions";
@@ -39,6 +40,21 @@ export async function benchCommissionPage(app: RunningApp, ws: BulkWorkshop, coo
     },
     plan,
   );
+}
+
+/** One request at a time, after one unmeasured: the median of `n` (ms), for pages too slow to load with autocannon. */
+export async function sequentialMs(url: string, headers: Record<string, string>, n = 3): Promise<number> {
+  const once = async () => {
+    const t = performance.now();
+    const res = await fetch(url, { headers, redirect: "manual" });
+    await res.arrayBuffer();
+    if (res.status !== 200) throw new Error(`${url} answered ${res.status}`);
+    return performance.now() - t;
+  };
+  await once();
+  const times: number[] = [];
+  for (let i = 0; i < n; i++) times.push(await once());
+  return times.sort((a, b) => a - b)[n >> 1]!;
 }
 
 /** Both answer 200 before anything is timed, and the floor is shut without its token. */
