@@ -22,8 +22,13 @@ const extra = process.argv.slice(3);
 // `npm test -- --serve` builds and starts the test stack and keeps it up without running anything:
 // then `TEST_APP_URL=http://localhost:3100 npx vitest run tests/http/x.test.ts` as often as needed.
 const serveOnly = extra.includes("--serve");
-const wantE2e = extra.length === 0 || extra.includes("--e2e");
-const vitestArgs = extra.filter((a) => a !== "--e2e" && a !== "--serve");
+// Playwright spec files among the words go to Playwright (only those run), the rest to Vitest; with
+// only spec files named, Vitest is skipped.
+const isSpec = (a) => a.endsWith(".spec.ts");
+const specArgs = extra.filter(isSpec);
+const vitestArgs = extra.filter((a) => a !== "--e2e" && a !== "--serve" && !isSpec(a));
+const wantE2e = extra.length === 0 || extra.includes("--e2e") || specArgs.length > 0;
+const wantVitest = vitestArgs.length > 0 || specArgs.length === 0;
 if (!["start", "dev", "test"].includes(mode)) {
   console.error(`usage: launcher.mjs start|dev|test (got ${mode})`);
   process.exit(2);
@@ -191,18 +196,20 @@ async function main() {
 
   const testEnv = { ...appEnv, NODE_ENV: "test", TEST_APP_URL: env.APP_URL };
   let status = 0;
-  const vitest = spawnSync(process.execPath, [join(ROOT, "node_modules", "vitest", "vitest.mjs"), "run", ...vitestArgs], {
-    cwd: ROOT,
-    env: testEnv,
-    stdio: "inherit",
-  });
-  status = vitest.status ?? 1;
+  if (wantVitest) {
+    const vitest = spawnSync(process.execPath, [join(ROOT, "node_modules", "vitest", "vitest.mjs"), "run", ...vitestArgs], {
+      cwd: ROOT,
+      env: testEnv,
+      stdio: "inherit",
+    });
+    status = vitest.status ?? 1;
+  }
 
   if (existsSync(join(ROOT, "tests", "e2e")) && process.env.SKIP_E2E !== "1" && wantE2e) {
     run("bash", ["scripts/ensure-chromium.sh"], env, "Chromium install");
     const pw = spawnSync(
       process.execPath,
-      [join(ROOT, "node_modules", "@playwright", "test", "cli.js"), "test", "--config", "tests/e2e/playwright.config.ts"],
+      [join(ROOT, "node_modules", "@playwright", "test", "cli.js"), "test", "--config", "tests/e2e/playwright.config.ts", ...specArgs],
       { cwd: ROOT, env: testEnv, stdio: "inherit" },
     );
     if ((pw.status ?? 1) !== 0) status = pw.status ?? 1;

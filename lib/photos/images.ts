@@ -21,21 +21,22 @@ export interface PreparedPhoto {
   thumb: ImageVersion;
 }
 
-const notAnImage = (name: string) =>
-  new AppError("validation_failed", `${name} is not a photo we can read: upload a JPEG, PNG, WebP or AVIF image.`, [
+/** `what`: how the message names the upload ("a photo"; "an image" for the logo). */
+const notAnImage = (name: string, what = "a photo") =>
+  new AppError("validation_failed", `${name} is not ${what} we can read: upload a JPEG, PNG, WebP or AVIF image.`, [
     { path: "file", message: "The file's content is not a JPEG, PNG, WebP or AVIF image." },
   ]);
 
 /** What the bytes are, read from their header by sharp; refuses anything but the accepted formats. */
-export async function inspectImage(bytes: Buffer, name: string): Promise<{ format: string; width: number; height: number }> {
+export async function inspectImage(bytes: Buffer, name: string, what = "a photo"): Promise<{ format: string; width: number; height: number }> {
   let meta: Metadata;
   try {
     meta = await sharp(bytes, { limitInputPixels: false }).metadata();
   } catch {
-    throw notAnImage(name);
+    throw notAnImage(name, what);
   }
   const format = meta.format ?? "";
-  if (!(ACCEPTED_FORMATS as readonly string[]).includes(format) || !meta.width || !meta.height) throw notAnImage(name);
+  if (!(ACCEPTED_FORMATS as readonly string[]).includes(format) || !meta.width || !meta.height) throw notAnImage(name, what);
   if (meta.width * meta.height > MAX_PHOTO_PIXELS) {
     throw new AppError("validation_failed", `${name} is ${meta.width} × ${meta.height} pixels; photos may be at most ${MAX_PHOTO_PIXELS / 1e6} megapixels.`, [
       { path: "file", message: "Too many pixels." },

@@ -15,7 +15,7 @@ export interface PreparedLogo {
 }
 
 export async function prepareLogo(bytes: Buffer, name: string): Promise<PreparedLogo> {
-  await inspectImage(bytes, name);
+  await inspectImage(bytes, name, "an image");
   try {
     const { data, info } = await sharp(bytes, { limitInputPixels: MAX_PHOTO_PIXELS, failOn: "error" })
       .rotate()

@@ -1,8 +1,8 @@
 // The bookkeeper's journey in a real browser: the ledger (filters in the address bar, totals, the
 // CSV of the same filters), then the month's reconciliation against the processor — compare, see
 // one exception of each kind, resolve each with a note, lock the month — and the reconciliation's
-// CSV, downloaded and read back with csv-parse. The month is made through the app and the payments
-// fake (books-month.ts).
+// CSV, downloaded and read back with csv-parse; then the monthly summary and held and earned. The month
+// is made through the app and the payments fake (books-month.ts). Screens kept in tests/artifacts/screens.
 import { readFileSync } from "node:fs";
 import { expect, test, type Download, type Page } from "@playwright/test";
 import { parse } from "csv-parse/sync";
@@ -91,4 +91,14 @@ test("bookkeeper: ledger, reconciling a month with every kind of exception, lock
   expect(rows.filter((r) => r.section === "match").length).toBeGreaterThanOrEqual(5);
   expect(rows.some((r) => r.section === "payout")).toBe(true);
   for (const r of rows.filter((x) => x.date)) expect(new Date(r.date!).toISOString()).toBe(r.date);
+
+  // The monthly summary shows the month reconciled; held and earned lists what is still held.
+  const booksNav = page.getByRole("navigation", { name: "Books" });
+  await booksNav.getByRole("link", { name: "Monthly summary" }).click();
+  await expect(page.getByRole("row", { name: monthLabel(month) })).toContainText("Reconciled, locked", LOAD);
+  await keepScreenshot(page, "books-summary");
+  await booksNav.getByRole("link", { name: "Held and earned" }).click();
+  await expect(page.getByRole("heading", { name: "Held and earned" })).toBeVisible(LOAD);
+  await expect(page.getByTestId("earned-total")).not.toHaveText("Nothing", LOAD);
+  await keepScreenshot(page, "books-held");
 });

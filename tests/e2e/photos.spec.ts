@@ -2,13 +2,14 @@
 // (@uploadthing/react, straight to the uploads fake) and watches the progress bar; the client
 // then finds it in the gallery under its stage. With the upload service down, the builder gets a
 // message that says so, and nothing appears.
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { closeTestDb } from "../setup/test-db";
 import { createWorkshopWithMembers, type TestWorkshop } from "../http/fixtures";
 import { commissionInBuild, setFakeOutage } from "../http/photo-helpers";
 import { signIn } from "../http/session";
 import { jpegWithGps } from "../support/photos";
 import { keepScreenshot } from "./screenshot";
+import { watchProgress } from "./upload-progress";
 import { signInInBrowser } from "./sign-in";
 
 let ws: TestWorkshop;
@@ -25,20 +26,6 @@ test.afterAll(async () => {
   await setFakeOutage("none").catch(() => undefined);
   await closeTestDb();
 });
-
-/** Records every state the progress bar announces, from before the upload starts. */
-async function watchProgress(page: Page): Promise<() => Promise<string[]>> {
-  await page.evaluate(() => {
-    const seen: string[] = [];
-    (window as unknown as { __progress: string[] }).__progress = seen;
-    new MutationObserver(() => {
-      const bar = document.querySelector('[role="progressbar"]');
-      const text = bar?.getAttribute("aria-valuetext");
-      if (bar && text && seen.at(-1) !== text) seen.push(`${bar.getAttribute("aria-valuenow")}|${text}`);
-    }).observe(document.body, { subtree: true, childList: true, attributes: true });
-  });
-  return () => page.evaluate(() => (window as unknown as { __progress: string[] }).__progress);
-}
 
 test("the builder uploads a stage photo with a progress bar, and the client sees it in the gallery", async ({ browser }) => {
   test.setTimeout(180_000);

@@ -2,7 +2,10 @@
 // of another workshop, 403 with the exact body for builders and clients, and each route's own answer
 // for the owner and the bookkeeper (the owner alone reviews changes to a locked month). Real app over
 // HTTP, real MariaDB; the comparison reads the shared payments fake and changes nothing there.
-import { afterAll, beforeAll } from "vitest";
+// The books pages answer the same way as pages do: owner and bookkeeper see them, builders and
+// clients get the 403 page, another workshop's owner the 404 page, and the workshop's navigation
+// shows Books to those who may open it. Product rules (issue 7).
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@/lib/auth/permissions";
 import { closeTestDb } from "../setup/test-db";
 import { signInRoles } from "./commission-helpers";
@@ -58,3 +61,42 @@ const ROUTES: MatrixRoute[] = [
 ];
 
 describeRoleMatrix("books routes, role by role", ROUTES, { slug: () => a.slug, as: (who) => as[who]! });
+
+describe("books pages, role by role", () => {
+  const pages = ["", "/reconciliation", "/reconciliation/2026-05", "/held", "/summary"];
+  const page = (p: string) => `/${a.slug}/books${p}`;
+  const status = async (who: MatrixWho, path: string) => (await as[who]!.fetch(path)).status;
+
+  it("open for the owner and the bookkeeper, with their headings", async () => {
+    const headings: Record<string, string> = {
+      "": "Payments ledger",
+      "/reconciliation": "Reconciliation with the processor",
+      "/reconciliation/2026-05": "Reconciliation: May 2026",
+      "/held": "Held and earned",
+      "/summary": "Monthly summary",
+    };
+    for (const p of pages) {
+      for (const who of ["owner", "bookkeeper"] as const) {
+        const res = await as[who]!.fetch(page(p));
+        expect(res.status, `${who} ${p}`).toBe(200);
+        expect(await res.text(), p).toContain(headings[p]!);
+      }
+    }
+  });
+
+  it("answer 403 to builders and clients and 404 to another workshop's owner", async () => {
+    for (const p of pages) {
+      for (const who of ["builder", "client"] as const) expect(await status(who, page(p)), `${who} ${p}`).toBe(403);
+      const theirs = await as.outsider!.fetch(page(p));
+      expect(theirs.status, p).toBe(404);
+      expect(await theirs.text()).not.toContain(a.name);
+    }
+    expect(await status("owner", page("/reconciliation/2026-13"))).toBe(404);
+    expect(await status("owner", page("/reconciliation/may"))).toBe(404);
+  });
+
+  it("show Books in the workshop's navigation to the owner and the bookkeeper only", async () => {
+    const nav = async (who: MatrixWho) => (await (await as[who]!.fetch(`/${a.slug}`)).text()).includes(`href="/${a.slug}/books"`);
+    expect([await nav("owner"), await nav("bookkeeper"), await nav("builder"), await nav("client")]).toEqual([true, true, false, false]);
+  });
+});

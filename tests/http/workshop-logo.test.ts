@@ -92,7 +92,7 @@ describe("uploading the workshop logo", () => {
 
   it("refuses a text file named like an image by its content, keeping nothing", async () => {
     const up = await uploadLogo(s.owner, a.slug, fileOf(NOT_AN_IMAGE, "logo.png", "image/png"));
-    expect(up.serverData).toMatchObject({ ok: false, code: "validation_failed", message: "logo.png is not a photo we can read: upload a JPEG, PNG, WebP or AVIF image." });
+    expect(up.serverData).toMatchObject({ ok: false, code: "validation_failed", message: "logo.png is not an image we can read: upload a JPEG, PNG, WebP or AVIF image." });
     expect(await storedKey(a)).toBeNull();
     expect((await fakeFiles()).find((f) => f.key === up.key)).toBeUndefined();
   });

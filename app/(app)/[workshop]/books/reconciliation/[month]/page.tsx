@@ -34,7 +34,7 @@ export default async function PeriodPage({ params }: { params: Promise<{ worksho
     <div className="space-y-6">
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
-          <h2 className="text-xl font-semibold">Reconciliation: {p.label}</h2>
+          <h2 className="text-xl font-semibold">{`Reconciliation: ${p.label}`}</h2>
           <p className="mt-1 flex flex-wrap items-center gap-2 text-sm text-graphite-600">
             <Badge tone={PERIOD_STATUS[p.status].tone}>{PERIOD_STATUS[p.status].label}</Badge>
             {p.lastRunAt ? (
