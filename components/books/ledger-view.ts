@@ -2,7 +2,7 @@
 // truth, so a copied link reopens the same view; anything unreadable falls back to the default.
 // Pure: no React. The query names are the API's (GET …/books/ledger).
 import { isMonth } from "@/lib/books/months";
-import { LEDGER_KINDS, LEDGER_SORTS, LEDGER_STATUSES } from "@/lib/schemas/books";
+import { LEDGER_KINDS, LEDGER_SORTS, LEDGER_STATUSES } from "@/lib/schemas/books-values";
 
 export type LedgerSort = (typeof LEDGER_SORTS)[number];
 export const LEDGER_PAGE_SIZES = [25, 50, 100, 200] as const;

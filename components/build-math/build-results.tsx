@@ -5,12 +5,10 @@
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import type { ComputeResult } from "@/lib/schemas/instrument-spec";
 import { forceUnitFor, formatForce, formatLengthIn } from "@/lib/lutherie/units";
-import { FretTable } from "./fret-table";
-import { HarmonicsChart } from "./harmonics-chart";
 import { IssueList } from "./issue-list";
+import { FretTable, HarmonicsChart, TensionChart } from "./lazy-charts";
 import { PickupTable } from "./pickup-table";
 import { StringTable } from "./string-table";
-import { TensionChart } from "./tension-chart";
 
 export interface BuildResultsProps {
   result: ComputeResult;

@@ -1,9 +1,9 @@
 "use client";
 
 // Fret positions from a ComputeResult, on TanStack Table v9, with copy to the clipboard and a CSV
-// download. Takes the result as a prop, so any screen that computes a spec can show it.
+// download. Takes the result as a prop, so any screen that computes a spec can show it. The CSV
+// writer (with the Buffer shim it brings) loads on the first download, not with the page.
 import { createColumnHelper, tableFeatures, useTable, type ColumnDef } from "@tanstack/react-table";
-import { stringify } from "csv-stringify/browser/esm/sync";
 import { useMemo } from "react";
 import { Button } from "@/components/ui/button";
 import { Table, TBody, Td, Th, THead } from "@/components/ui/table";
@@ -44,8 +44,15 @@ export function FretTable({ result, fileName = "fret-positions" }: FretTableProp
     }
   };
 
-  const download = () => {
-    const csv = stringify(fretTableText(result));
+  const download = async () => {
+    let csv: string;
+    try {
+      const { stringify } = await import("csv-stringify/browser/esm/sync");
+      csv = stringify(fretTableText(result));
+    } catch {
+      toast.show("The CSV download could not load; check the connection and try again.", "error");
+      return;
+    }
     const url = URL.createObjectURL(new Blob([csv], { type: "text/csv;charset=utf-8" }));
     const a = document.createElement("a");
     a.href = url;

@@ -8,7 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { CONSTRUCTIONS, type Construction, type InstrumentSpec, type SpecIssue } from "@/lib/schemas/instrument-spec";
+import type { InstrumentSpec, SpecIssue } from "@/lib/schemas/instrument-spec";
+import { CONSTRUCTIONS, type Construction } from "@/lib/schemas/instrument-spec-values";
 import { ComputedIssuesContext, fieldId, InputField, issuesByPath, NumberField, useFieldError } from "./spec-form-fields";
 
 export type SpecForm = UseFormReturn<InstrumentSpec>;

@@ -7,7 +7,8 @@ import type { z } from "zod";
 import { describedBy, Field } from "@/components/ui/field";
 import { Input, Textarea } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { BRIDGE_LABELS, BRIDGE_TYPES, NECK_JOINT_LABELS, NECK_JOINTS, type BuildOptions, type buildOptionsSchema } from "@/lib/schemas/build-options";
+import type { BuildOptions, buildOptionsSchema } from "@/lib/schemas/build-options";
+import { BRIDGE_LABELS, BRIDGE_TYPES, NECK_JOINT_LABELS, NECK_JOINTS } from "@/lib/schemas/build-options-values";
 import { OPTION_LABELS, optionText } from "./build-options-labels";
 
 export type BuildOptionsForm = UseFormReturn<z.input<typeof buildOptionsSchema>, unknown, BuildOptions>;

@@ -1,5 +1,6 @@
 // Names and display text of the build options, for the form, the read-only list and the diff.
-import { BRIDGE_LABELS, NECK_JOINT_LABELS, type BuildOptions } from "@/lib/schemas/build-options";
+import type { BuildOptions } from "@/lib/schemas/build-options";
+import { BRIDGE_LABELS, NECK_JOINT_LABELS } from "@/lib/schemas/build-options-values";
 
 export const OPTION_LABELS: Record<keyof BuildOptions, string> = {
   bodyWood: "Body wood",

@@ -1,9 +1,9 @@
 "use client";
 
 // The conversation between the client and the workshop on one commission.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
@@ -11,7 +11,7 @@ import { describedBy, Field } from "@/components/ui/field";
 import { Textarea } from "@/components/ui/input";
 import { ROLE_LABELS, isRole } from "@/lib/auth/permissions";
 import { errorMessage } from "@/lib/http/api-client";
-import { commentSchema } from "@/lib/schemas/commission";
+import type { commentSchema } from "@/lib/schemas/commission";
 import { commissionPaths } from "./api-paths";
 import { formatWhen } from "./format";
 import { useComments } from "./queries";
@@ -19,11 +19,13 @@ import { Empty, Failed, Loading } from "./query-states";
 import { applyApiErrors } from "./api-errors";
 import { useCommissionChange } from "./use-commission-change";
 
+const commentResolver = lazyZodResolver(() => import("@/lib/schemas/commission").then((m) => m.commentSchema));
+
 type CommentInput = z.input<typeof commentSchema>;
 
 export function CommentsThread({ slug, commissionId, me, isClient }: { slug: string; commissionId: number; me: number; isClient: boolean }) {
   const comments = useComments(slug, commissionId);
-  const form = useForm<CommentInput>({ resolver: zodResolver(commentSchema), defaultValues: { body: "" } });
+  const form = useForm<CommentInput>({ resolver: commentResolver, defaultValues: { body: "" } });
   const add = useCommissionChange<CommentInput>(slug, (v) => ({ path: commissionPaths(slug).comments(commissionId), json: v }));
   const error = form.formState.errors.body?.message;
 

@@ -5,6 +5,7 @@
 // enforces). Only changed fields are sent, checked first with the shared commissionPatchSchema.
 import { useForm } from "react-hook-form";
 import { useState } from "react";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
@@ -12,13 +13,15 @@ import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { ApiError } from "@/lib/http/api-client";
 import { parseMajor, toMajorString, money } from "@/lib/money/money";
-import { commissionPatchSchema, type CommissionPatch } from "@/lib/schemas/commission";
+import type { CommissionPatch } from "@/lib/schemas/commission";
 import type { CommissionDetail } from "@/lib/schemas/commission-out";
 import { commissionPaths } from "./api-paths";
 import { applyApiErrors } from "./api-errors";
 import { formatPrice } from "./format";
 import { useCommissionPeople } from "./queries";
 import { useCommissionChange } from "./use-commission-change";
+
+const commissionPatchSchema = lazySchema(() => import("@/lib/schemas/commission").then((m) => m.commissionPatchSchema));
 
 interface EditValues {
   title: string;
@@ -61,7 +64,7 @@ export function EditCommissionForm({ slug, commission, isOwner, onDone }: { slug
     }
     if (moneyOpen && dirtyFields.depositPercent) patch.depositPercent = v.depositPercent.trim() === "" ? Number.NaN : Number(v.depositPercent);
     if (Object.keys(patch).length === 0) return onDone();
-    const checked = commissionPatchSchema.safeParse(patch);
+    const checked = await commissionPatchSchema.safeParse(patch);
     if (!checked.success) {
       for (const i of checked.error.issues) {
         const field = i.path[0] === "priceMinor" ? "price" : String(i.path[0] ?? "");

@@ -5,7 +5,7 @@
 import { useEffect, useState } from "react";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { COMMISSION_SORTS } from "@/lib/schemas/commission";
+import { COMMISSION_SORTS } from "@/lib/schemas/commission-values";
 import { DEFAULT_VIEW, isFiltered, PAGE_SIZES, type CommissionSort, type ListView } from "./list-view";
 import type { PersonOption, StageOption } from "./queries";
 

@@ -1,7 +1,7 @@
 // The commissions table's view (filters, search, sort, page) and its address-bar form. The URL is
 // the one source of truth, so a copied link reopens the same view; anything unreadable in it falls
 // back to the default rather than failing the page. Pure: no React.
-import { COMMISSION_SORTS } from "@/lib/schemas/commission";
+import { COMMISSION_SORTS } from "@/lib/schemas/commission-values";
 
 export type CommissionSort = (typeof COMMISSION_SORTS)[number];
 export const PAGE_SIZES = [10, 25, 50, 100] as const;

@@ -2,7 +2,7 @@
 // reads: field names instead of paths, enum labels instead of keys, and lengths in the workshop's
 // unit whatever unit each version was stored in. Pure: no React.
 import { convertLengthInput, formatGaugeIn, formatLengthIn, type LengthUnit } from "@/lib/lutherie/units";
-import { CONSTRUCTION_LABELS, type Construction } from "@/lib/schemas/instrument-spec";
+import { CONSTRUCTION_LABELS, type Construction } from "@/lib/schemas/instrument-spec-values";
 import type { BuildOptions } from "@/lib/schemas/build-options";
 import type { FieldChange } from "@/lib/workflow/spec-diff";
 import { OPTION_LABELS, optionText } from "./build-options-labels";

@@ -3,8 +3,10 @@
 // withWorkshop / workshopAction / requireWorkshopPage), and gets back the scope its data
 // functions need. The workshop id comes from the membership row, never from the request.
 import { cache } from "react";
+import { findBenchFloorOwner } from "@/lib/data/bench-floor";
 import { findMembershipBySlug, type WorkshopRecord } from "@/lib/data/memberships";
 import { findProcessorEventActor } from "@/lib/data/processor-actor";
+import { benchFloorToken } from "@/lib/http/bench-floor-token";
 import { forbidden, notFound } from "@/lib/http/errors";
 import { can, type Permission, type PermissionRequirement, type Role } from "./permissions";
 import { mintWorkshopScope, type WorkshopScope } from "./scope";
@@ -75,4 +77,16 @@ export async function resolveMemberAccess(userId: number, slug: string, required
   const ctx = await membershipContext(userId, slug);
   if (required && !ctx.can(required)) throw forbidden();
   return ctx;
+}
+
+/**
+ * Benchmark floors only (app/api/bench/**, which answer 404 unless the server runs with
+ * BENCH_FLOOR_TOKEN and the request carries it): the workshop's first owner as a scope, so a floor
+ * runs a page's own data functions with no session or membership check around them. Null while
+ * the floors are off, whoever calls.
+ */
+export async function resolveBenchFloorScope(workshopId: number): Promise<WorkshopScope | null> {
+  if (!benchFloorToken()) return null;
+  const owner = await findBenchFloorOwner(workshopId);
+  return owner ? mintWorkshopScope({ workshopId, ...owner }) : null;
 }

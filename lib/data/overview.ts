@@ -58,7 +58,7 @@ async function listBuilders(scope: WorkshopScope): Promise<Array<{ id: number; n
  * Deposits asked for (the commission has left the spec stage) and not paid in full. The set-based
  * form of paymentTotals (lib/data/payment-totals.ts): paid deposits less refunds of deposits.
  */
-async function depositsOutstanding(scope: WorkshopScope, cohortId: number | undefined, template: readonly BuildStage[]): Promise<NonNullable<Overview["depositsOutstanding"]>> {
+async function depositsOutstanding(scope: WorkshopScope, cohortId: number | undefined, template: readonly BuildStage[], limit: number): Promise<NonNullable<Overview["depositsOutstanding"]>> {
   const paidSum = db.raw("COALESCE(SUM(CASE WHEN p.kind = 'deposit' THEN p.amount_minor WHEN p.kind = 'refund' AND o.kind = 'deposit' THEN -p.amount_minor ELSE 0 END), 0) AS paid");
   const q = selectCommissionRefs(openCommissions(scope, cohortId), "c.currency", "c.deposit_minor", paidSum)
     .leftJoin("payments as p", (j) => j.on("p.commission_id", "c.id").andOn("p.workshop_id", "c.workshop_id").andOnVal("p.status", "paid"))
@@ -81,7 +81,8 @@ async function depositsOutstanding(scope: WorkshopScope, cohortId: number | unde
     t.commissions += 1;
     totals.set(i.currency, t);
   }
-  return { totals: [...totals.values()].sort((a, b) => a.currency.localeCompare(b.currency)), items };
+  // Totals count every commission; the rows stop at `limit` (a long list is drawn from the table).
+  return { totals: [...totals.values()].sort((a, b) => a.currency.localeCompare(b.currency)), items: items.slice(0, limit) };
 }
 
 /** The overview as of now (UTC); `limit` caps each list (the counts are always complete). */
@@ -102,7 +103,7 @@ export async function getOverview(scope: WorkshopScope, query: OverviewQuery, op
     selectCommissionRefs(openCommissions(scope, query.cohort), "c.stage_entered_at").orderBy("c.number") as Promise<OpenRow[]>,
     finishedStays(scope),
     listBuilders(scope),
-    can(scope.role, "payment.read") ? depositsOutstanding(scope, query.cohort, template) : Promise.resolve(null),
+    can(scope.role, "payment.read") ? depositsOutstanding(scope, query.cohort, template, limit) : Promise.resolve(null),
     listCohorts(scope),
   ]);
 

@@ -1,9 +1,9 @@
 // One schema per form and API body of sign-in, sign-up, reset and account changes; shared by the
 // client forms (zodResolver), the server actions and the Auth.js credentials provider.
 import { z } from "zod";
+import { PASSWORD_MAX, PASSWORD_MIN } from "./auth-values";
 
-export const PASSWORD_MIN = 10;
-export const PASSWORD_MAX = 200;
+export { PASSWORD_MAX, PASSWORD_MIN } from "./auth-values";
 
 /** An e-mail address, trimmed and lower-cased so lookups and rate limits match however it was typed. */
 export const emailSchema = z

@@ -2,6 +2,7 @@ import { z } from "zod";
 import type { CurrencyTotals } from "../books/entries";
 import type { ExceptionKind } from "../books/exception-kinds";
 import { MONTH_PATTERN } from "../books/months";
+import { LEDGER_KINDS, LEDGER_SORTS, LEDGER_STATUSES } from "./books-values";
 
 // The books (ledger, reconciliation, held and earned, monthly summary): the inputs of their routes
 // and pages, and the shapes that leave lib/data.
@@ -9,9 +10,7 @@ import { MONTH_PATTERN } from "../books/months";
 const id = z.coerce.number().int().positive().max(2_147_483_647);
 export const monthSchema = z.string().regex(MONTH_PATTERN, "Use a month like 2027-03.");
 
-export const LEDGER_SORTS = ["date", "-date", "amount", "-amount", "commission", "-commission"] as const;
-export const LEDGER_STATUSES = ["paid", "pending", "failed", "cancelled", "all"] as const;
-export const LEDGER_KINDS = ["deposit", "balance", "refund"] as const;
+export { LEDGER_KINDS, LEDGER_SORTS, LEDGER_STATUSES } from "./books-values";
 
 export const ledgerQuerySchema = z.object({
   period: monthSchema.optional(),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { CURRENCIES } from "../money/money";
+import { COMMISSION_SORTS } from "./commission-values";
 
 // One schema per commission input, shared by the forms, the route handlers and lib/data.
 
@@ -35,7 +36,7 @@ export const commissionPatchSchema = z
   .refine((v) => Object.keys(v).length > 0, { message: "Send at least one field to change." });
 export type CommissionPatch = z.infer<typeof commissionPatchSchema>;
 
-export const COMMISSION_SORTS = ["number", "-number", "title", "-title", "stage", "-stage", "targetDate", "-targetDate", "updated", "-updated"] as const;
+export { COMMISSION_SORTS } from "./commission-values";
 
 const boolParam = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1");
 

@@ -7,30 +7,9 @@ import { z } from "zod";
 import { parseNote, REFERENCE_PITCH_RANGE_HZ } from "@/lib/lutherie/pitch";
 import { MAX_FRETS, MIN_FRETS } from "@/lib/lutherie/frets";
 import { toMm, type LengthUnit } from "@/lib/lutherie/units";
+import { CONSTRUCTIONS, CORE_SHAPES, FAMILIES, LENGTH_UNITS, type Construction } from "./instrument-spec-values";
 
-export const LENGTH_UNITS = ["mm", "in"] as const;
-export const FAMILIES = ["guitar", "bass"] as const;
-export const CORE_SHAPES = ["hex", "round"] as const;
-
-/** String constructions. Every round-wound string has a steel music-wire core. */
-export const CONSTRUCTIONS = [
-  "plain-steel",
-  "round-wound-nickel",
-  "round-wound-pure-nickel",
-  "round-wound-stainless",
-  "round-wound-phosphor-bronze",
-  "round-wound-80-20-bronze",
-] as const;
-export type Construction = (typeof CONSTRUCTIONS)[number];
-
-export const CONSTRUCTION_LABELS: Record<Construction, string> = {
-  "plain-steel": "Plain steel",
-  "round-wound-nickel": "Round-wound, nickel-plated steel",
-  "round-wound-pure-nickel": "Round-wound, pure nickel",
-  "round-wound-stainless": "Round-wound, stainless steel",
-  "round-wound-phosphor-bronze": "Round-wound, phosphor bronze",
-  "round-wound-80-20-bronze": "Round-wound, 80/20 bronze",
-};
+export { CONSTRUCTION_LABELS, CONSTRUCTIONS, CORE_SHAPES, FAMILIES, LENGTH_UNITS, type Construction } from "./instrument-spec-values";
 
 /** Limits, in millimetres where they are lengths (checked after converting from `units`). */
 export const SPEC_LIMITS = {

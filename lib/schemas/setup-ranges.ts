@@ -36,12 +36,4 @@ export const familyRangesSchema = z.object({
 export const setupRangesSchema = z.object({ guitar: familyRangesSchema, bass: familyRangesSchema });
 export type WorkshopSetupRanges = z.infer<typeof setupRangesSchema>;
 
-/** The measures of a range set, in the order forms and tables show them. */
-export const RANGE_FIELDS = [
-  { key: "actionTrebleSideMm", label: "Action at the 12th, treble side" },
-  { key: "actionBassSideMm", label: "Action at the 12th, bass side" },
-  { key: "reliefMm", label: "Neck relief" },
-  { key: "nutSlotMm", label: "Nut slot height over the 1st fret" },
-  { key: "pickupTrebleSideMm", label: "Pickup height, treble side" },
-  { key: "pickupBassSideMm", label: "Pickup height, bass side" },
-] as const satisfies ReadonlyArray<{ key: Exclude<keyof SetupRanges, "intonationToleranceCents">; label: string }>;
+export { RANGE_FIELDS } from "./setup-ranges-values";

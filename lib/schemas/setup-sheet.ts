@@ -1,23 +1,12 @@
 import { z } from "zod";
+import { ELECTRONICS_CHECKS, type ElectronicsCheckKey } from "./setup-sheet-values";
 
 // The final setup sheet of a commission, as stored: every length in millimetres (forms convert
 // from the workshop's unit before sending), forces in newtons, intonation in cents.
 
 const mm = (what: string) => z.number({ error: `Enter ${what} as a number.` }).finite();
 
-/** Our own electronics checklist, in the order a builder works through it. */
-export const ELECTRONICS_CHECKS = [
-  { key: "jack_output", label: "Output jack tight; signal on every pickup" },
-  { key: "selector_positions", label: "Every selector position gives the expected pickup(s)" },
-  { key: "pots_sweep", label: "Volume and tone controls sweep smoothly, no crackle" },
-  { key: "string_ground", label: "Bridge and strings bonded to signal ground (continuity measured)" },
-  { key: "shielding", label: "Cavity shielding continuous to ground" },
-  { key: "hum_touch", label: "Hum drops when the strings are touched" },
-  { key: "balance", label: "Output levels balanced between pickups" },
-  { key: "active_current", label: "Active electronics: battery current draw checked (skip if passive)" },
-] as const;
-
-export type ElectronicsCheckKey = (typeof ELECTRONICS_CHECKS)[number]["key"];
+export { ELECTRONICS_CHECKS, type ElectronicsCheckKey } from "./setup-sheet-values";
 
 export const pullTestSchema = z.object({
   forceN: mm("the force").positive("The force must be above zero."),

@@ -1,10 +1,10 @@
 // The workshop (tenant): name, slug, unit preference and currency.
 import { z } from "zod";
 
+export { COMMON_CURRENCIES, slugFromName } from "./workshop-values";
+
 export const UNIT_PREFERENCES = ["mm", "in"] as const;
 
-/** Currencies offered in the form; any ISO 4217 code the runtime knows is accepted by the API. */
-export const COMMON_CURRENCIES = ["EUR", "USD", "GBP", "CAD", "AUD", "NZD", "CHF", "SEK", "NOK", "DKK", "JPY"] as const;
 const KNOWN_CURRENCIES = new Set(Intl.supportedValuesOf("currency"));
 
 // Top-level paths the app uses itself: a workshop slug must never shadow them.
@@ -41,19 +41,3 @@ export const workshopOutSchema = z.object({
   unitPreference: z.enum(UNIT_PREFERENCES),
   currency: z.string(),
 });
-
-/** Proposes a slug from a name: "Fernhollow Luthiery" → "fernhollow-luthiery". */
-const LETTERS: Record<string, string> = { ø: "o", æ: "ae", œ: "oe", ß: "ss", đ: "d", ł: "l", þ: "th" };
-
-export function slugFromName(name: string): string {
-  return name
-    .toLowerCase()
-    .replace(/[øæœßđłþ]/g, (c) => LETTERS[c] ?? c)
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 48)
-    .replace(/-+$/g, "");
-}

@@ -1,6 +1,7 @@
 // A workshop's setup ranges between the workshop's unit (the owner's form) and storage (mm). Pure.
 import { INPUT_DECIMALS, fromMm, roundTo, toMm, type LengthUnit } from "@/lib/lutherie/units";
-import { RANGE_FIELDS, type WorkshopSetupRanges } from "@/lib/schemas/setup-ranges";
+import type { WorkshopSetupRanges } from "@/lib/schemas/setup-ranges";
+import { RANGE_FIELDS } from "@/lib/schemas/setup-ranges-values";
 import type { SetupRanges } from "./ranges";
 
 function mapFamily(r: SetupRanges, f: (v: number) => number): SetupRanges {

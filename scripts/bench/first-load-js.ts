@@ -34,10 +34,13 @@ export function scriptUrls(html: string, pageUrl: string): string[] {
   return [...found];
 }
 
-/** Weighs one page as a browser with `cookie` would first load it. */
+/**
+ * Weighs one page as a browser with `cookie` would first load it. Redirects are not followed, so
+ * a page that sends the visitor elsewhere (to sign in, say) shows as its 3xx status.
+ */
 export async function weighPage(base: string, path: string, cookie = "", cache = new Map<string, Buffer>()): Promise<PageWeight> {
   const pageUrl = `${base}${path}`;
-  const res = await fetch(pageUrl, { headers: cookie ? { cookie } : {}, redirect: "follow" });
+  const res = await fetch(pageUrl, { headers: cookie ? { cookie } : {}, redirect: "manual" });
   const html = await res.text();
   let raw = 0;
   let gz = 0;

@@ -105,8 +105,11 @@ export const ACCESS_TABLE: Record<string, Row> = {
     request: () => ({ path: "/api/auth/callback/credentials", method: "POST", body: new URLSearchParams({ email: uniqueEmail("matrix-nobody"), password: "not-the-password" }).toString(), headers: { "content-type": "application/x-www-form-urlencoded" } }),
     expect: everyone(302),
   }),
-  // Exists only in the benchmark's own server (with its token); everywhere else a 404.
+  // The benchmark floors: only in the benchmark's own server (with its token); everywhere else a 404.
   "GET /api/bench/commission-list": route({ request: (w) => ({ path: `/api/bench/commission-list?workshopId=${w.a.id}` }), expect: everyone(404) }),
+  "GET /api/bench/commission-summary": route({ request: (w) => ({ path: `/api/bench/commission-summary?workshopId=${w.a.id}` }), expect: everyone(404) }),
+  "GET /api/bench/overview": route({ request: (w) => ({ path: `/api/bench/overview?workshopId=${w.a.id}` }), expect: everyone(404) }),
+  "POST /api/bench/stripe-signature": route({ request: () => ({ path: "/api/bench/stripe-signature", method: "POST", json: { id: "evt_matrix" } }), expect: everyone(404) }),
   "POST /api/compute": route({ request: () => ({ path: "/api/compute", method: "POST", json: spec() }), expect: everyone(200) }),
   "GET /api/health": route({ request: () => ({ path: "/api/health" }), expect: everyone(200) }),
   "POST /api/invitations/accept": route({ request: () => ({ path: "/api/invitations/accept", method: "POST", json: { token: fakeToken } }), expect: signedIn(404) }),

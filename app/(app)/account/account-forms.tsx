@@ -1,16 +1,19 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { accountNameSchema, changePasswordSchema } from "@/lib/schemas/auth";
+import type { accountNameSchema, changePasswordSchema } from "@/lib/schemas/auth";
 import { changePasswordAction, renameAction } from "./actions";
+
+const accountNameResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.accountNameSchema));
+const changePasswordResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.changePasswordSchema));
 
 type Notice = { tone: "success" | "error"; text: string } | null;
 
@@ -18,7 +21,7 @@ export function NameForm({ name }: { name: string }) {
   const router = useRouter();
   const [notice, setNotice] = useState<Notice>(null);
   const { register, handleSubmit, setError, formState } = useForm<z.input<typeof accountNameSchema>>({
-    resolver: zodResolver(accountNameSchema),
+    resolver: accountNameResolver,
     defaultValues: { name },
   });
   const onSubmit = handleSubmit(async (values) => {
@@ -46,7 +49,7 @@ export function PasswordForm({ hasPassword }: { hasPassword: boolean }) {
   const router = useRouter();
   const [notice, setNotice] = useState<Notice>(null);
   const { register, handleSubmit, setError, reset, formState } = useForm<z.input<typeof changePasswordSchema>>({
-    resolver: zodResolver(changePasswordSchema),
+    resolver: changePasswordResolver,
     defaultValues: { current: "", password: "", confirm: "" },
   });
   const { errors, isSubmitting } = formState;

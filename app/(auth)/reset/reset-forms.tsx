@@ -1,21 +1,24 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { resetPasswordSchema, resetRequestSchema } from "@/lib/schemas/auth";
+import type { resetPasswordSchema, resetRequestSchema } from "@/lib/schemas/auth";
 import { requestResetAction, resetPasswordAction } from "./actions";
+
+const resetRequestResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.resetRequestSchema));
+const resetPasswordResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.resetPasswordSchema));
 
 export function ResetRequestForm() {
   const [sentTo, setSentTo] = useState<string | null>(null);
   const [message, setMessage] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<z.input<typeof resetRequestSchema>>({
-    resolver: zodResolver(resetRequestSchema),
+    resolver: resetRequestResolver,
     defaultValues: { email: "" },
   });
   const onSubmit = handleSubmit(async (values) => {
@@ -44,7 +47,7 @@ export function ResetRequestForm() {
 export function ResetPasswordForm({ token }: { token: string }) {
   const [message, setMessage] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<z.input<typeof resetPasswordSchema>>({
-    resolver: zodResolver(resetPasswordSchema),
+    resolver: resetPasswordResolver,
     defaultValues: { token, password: "", confirm: "" },
   });
   const { errors, isSubmitting } = formState;

@@ -1,16 +1,19 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { magicLinkSchema, passwordSignInSchema, type PasswordSignInInput } from "@/lib/schemas/auth";
+import type { PasswordSignInInput } from "@/lib/schemas/auth";
 import { cx } from "@/lib/ui/cx";
 import { sendSignInLinkAction, signInWithPasswordAction } from "./actions";
+
+const passwordSignInResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.passwordSignInSchema));
+const magicLinkResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.magicLinkSchema));
 
 type Mode = "password" | "link";
 
@@ -19,8 +22,8 @@ export function SignInForm({ callbackUrl, initialEmail, initialMessage, notice }
   const [message, setMessage] = useState<string | null>(initialMessage);
   const [sentTo, setSentTo] = useState<string | null>(null);
 
-  const password = useForm<PasswordSignInInput>({ resolver: zodResolver(passwordSignInSchema), defaultValues: { email: initialEmail, password: "" } });
-  const link = useForm<{ email: string }>({ resolver: zodResolver(magicLinkSchema), defaultValues: { email: initialEmail } });
+  const password = useForm<PasswordSignInInput>({ resolver: passwordSignInResolver, defaultValues: { email: initialEmail, password: "" } });
+  const link = useForm<{ email: string }>({ resolver: magicLinkResolver, defaultValues: { email: initialEmail } });
 
   const onPassword = password.handleSubmit(async (values) => {
     setMessage(null);

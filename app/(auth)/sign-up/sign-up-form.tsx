@@ -1,20 +1,23 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { PASSWORD_MIN, signUpSchema, type SignUpInput } from "@/lib/schemas/auth";
+import type { SignUpInput } from "@/lib/schemas/auth";
+import { PASSWORD_MIN } from "@/lib/schemas/auth-values";
 import { signUpAction } from "./actions";
+
+const signUpResolver = lazyZodResolver(() => import("@/lib/schemas/auth").then((m) => m.signUpSchema));
 
 export function SignUpForm({ callbackUrl }: { callbackUrl: string }) {
   const [message, setMessage] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<SignUpInput>({
-    resolver: zodResolver(signUpSchema),
+    resolver: signUpResolver,
     defaultValues: { name: "", email: "", password: "" },
   });
   const { errors, isSubmitting } = formState;

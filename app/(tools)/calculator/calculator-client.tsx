@@ -3,23 +3,22 @@
 // The calculator: the spec form on the left, live results on the right, the spec mirrored into the
 // address bar so the link can be shared. Computation runs here in the browser with the same pure
 // code as POST /api/compute, so typing never waits on the network.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import { BuildResults } from "@/components/build-math/build-results";
 import { PresetPicker } from "@/components/build-math/preset-picker";
-import { SetupHelpers } from "@/components/build-math/setup-helpers";
+import { SetupHelpers } from "@/components/build-math/lazy-setup-helpers";
 import { SpecFormFields } from "@/components/build-math/spec-form";
 import { focusSpecField } from "@/components/build-math/spec-form-fields";
 import { UnitSwitch } from "@/components/build-math/unit-switch";
-import { useLiveResult } from "@/components/build-math/use-live-result";
+import { specResolver, useLiveResult } from "@/components/build-math/use-live-result";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { useToast } from "@/components/ui/toast";
 import { convertSpecUnits } from "@/lib/lutherie/spec-units";
 import { encodeSpec, SPEC_QUERY_PARAM } from "@/lib/lutherie/spec-url";
 import type { LengthUnit } from "@/lib/lutherie/units";
-import { instrumentSpecSchema, type InstrumentSpec } from "@/lib/schemas/instrument-spec";
+import type { InstrumentSpec } from "@/lib/schemas/instrument-spec";
 
 /** Values typed as NaN (empty required fields) become empty again before a reset. */
 function withoutNaN<T>(value: T): T {
@@ -28,13 +27,13 @@ function withoutNaN<T>(value: T): T {
 
 export function CalculatorClient({ initialSpec, linkProblem }: { initialSpec: InstrumentSpec; linkProblem: boolean }) {
   const toast = useToast();
-  const form = useForm<InstrumentSpec>({ resolver: zodResolver(instrumentSpecSchema), mode: "onChange", defaultValues: initialSpec });
+  const form = useForm<InstrumentSpec>({ resolver: specResolver, mode: "onChange", defaultValues: initialSpec });
   const { values, parsed, result, shown } = useLiveResult(form, initialSpec);
   const [shareUrl, setShareUrl] = useState("");
   const units = (values.units ?? initialSpec.units) as LengthUnit;
 
   useEffect(() => {
-    if (!result || !parsed.success) return;
+    if (!result || !parsed?.success) return;
     // Mirror the spec into the address bar, a moment after typing stops.
     const t = setTimeout(() => {
       const url = `${window.location.pathname}?${SPEC_QUERY_PARAM}=${encodeSpec(parsed.data)}`;
@@ -82,7 +81,7 @@ export function CalculatorClient({ initialSpec, linkProblem }: { initialSpec: In
         </Card>
 
         <div className="min-w-0 space-y-6">
-          {result ? null : (
+          {result || !parsed ? null : (
             <p role="status" className="rounded-panel border border-amber-100 bg-amber-50 px-4 py-3 text-sm text-amber-700">
               Some fields need fixing (marked in the form). The figures below are for the last valid spec.
             </p>

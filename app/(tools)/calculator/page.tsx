@@ -3,7 +3,8 @@ import { ModelNotes } from "@/components/build-math/model-notes";
 import { SafetyCaution } from "@/components/build-math/safety-caution";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { DEFAULT_PRESET_ID, presetById } from "@/lib/lutherie/presets";
-import { decodeSpec, SPEC_QUERY_PARAM } from "@/lib/lutherie/spec-url";
+import { SPEC_QUERY_PARAM } from "@/lib/lutherie/spec-url";
+import { decodeSpec } from "@/lib/lutherie/spec-url-decode";
 import { CalculatorClient } from "./calculator-client";
 
 export const metadata: Metadata = {

@@ -1,7 +1,8 @@
 // The instrument spec schema: what it refuses, with the field paths a form and a 422 need.
 import { describe, expect, it } from "vitest";
 import { presetById } from "@/lib/lutherie/presets";
-import { decodeSpec, encodeSpec } from "@/lib/lutherie/spec-url";
+import { encodeSpec } from "@/lib/lutherie/spec-url";
+import { decodeSpec } from "@/lib/lutherie/spec-url-decode";
 import { instrumentSpecSchema } from "@/lib/schemas/instrument-spec";
 
 const base = () => structuredClone(presetById("six").spec) as Record<string, unknown> & ReturnType<typeof presetById>["spec"];

@@ -1,15 +1,17 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { cohortCreateSchema, type CohortCreateInput } from "@/lib/schemas/cohort";
+import type { CohortCreateInput } from "@/lib/schemas/cohort";
 import { createCohortAction, updateCohortAction } from "./actions";
+
+const cohortCreateResolver = lazyZodResolver(() => import("@/lib/schemas/cohort").then((m) => m.cohortCreateSchema));
 
 type Values = { name: string; startsOn: string; endsOn: string; builderIds: number[] };
 const FIELDS = ["name", "startsOn", "endsOn", "builderIds"] as const;
@@ -21,7 +23,7 @@ export function CohortForm({ slug, builders, cohortId, initial }: { slug: string
   const prefix = cohortId ? `cohort-${cohortId}` : "cohort-new";
   const empty: Values = { name: "", startsOn: "", endsOn: "", builderIds: [] };
   const { register, handleSubmit, setError, reset, control, formState } = useForm<CohortCreateInput>({
-    resolver: zodResolver(cohortCreateSchema),
+    resolver: cohortCreateResolver,
     defaultValues: initial ?? empty,
   });
   const { errors, isSubmitting } = formState;

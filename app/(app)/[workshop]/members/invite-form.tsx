@@ -1,24 +1,26 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/permissions";
-import { invitationCreateSchema, type InvitationCreateInput } from "@/lib/schemas/member";
+import type { InvitationCreateInput } from "@/lib/schemas/member";
 import { inviteMemberAction } from "./actions";
+
+const invitationCreateResolver = lazyZodResolver(() => import("@/lib/schemas/member").then((m) => m.invitationCreateSchema));
 
 export function InviteForm({ slug }: { slug: string }) {
   const router = useRouter();
   const [notice, setNotice] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const { register, handleSubmit, setError, reset, formState } = useForm<InvitationCreateInput>({
-    resolver: zodResolver(invitationCreateSchema),
+    resolver: invitationCreateResolver,
     defaultValues: { email: "", role: "client" },
   });
   const { errors, isSubmitting } = formState;

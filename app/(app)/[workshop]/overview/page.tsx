@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { StageTimeChart } from "@/components/overview/stage-time-chart";
-import { WorkloadChart } from "@/components/overview/workload-chart";
+import { StageTimeChart, WorkloadChart } from "@/components/overview/lazy-charts";
 import { Alert } from "@/components/ui/alert";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";

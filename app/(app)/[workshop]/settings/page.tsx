@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
 import { requireWorkshopPage } from "@/lib/auth/pages";
 import { getWorkshopSettings, toSettingsOut } from "@/lib/data/workshop-settings";
-import { LogoForm } from "./logo-form";
+import { LogoForm } from "./lazy-logo-form";
 import { SettingsForm } from "./settings-form";
 import { StageTemplateForm } from "./stage-template-form";
 

@@ -1,18 +1,20 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
-import { COMMON_CURRENCIES } from "@/lib/schemas/workshop";
-import { workshopSettingsPatchSchema, type WorkshopSettingsOut, type WorkshopSettingsPatchInput } from "@/lib/schemas/workshop-settings";
+import { COMMON_CURRENCIES } from "@/lib/schemas/workshop-values";
+import type { WorkshopSettingsOut, WorkshopSettingsPatchInput } from "@/lib/schemas/workshop-settings";
 import { updateSettingsAction } from "./actions";
+
+const workshopSettingsPatchResolver = lazyZodResolver(() => import("@/lib/schemas/workshop-settings").then((m) => m.workshopSettingsPatchSchema));
 
 const FIELDS = ["name", "unitPreference", "currency", "depositPercent", "requireStageSignoff", "emailSenderName"] as const;
 
@@ -22,7 +24,7 @@ export function SettingsForm({ slug, settings }: { slug: string; settings: Works
   const [notice, setNotice] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const currencies = COMMON_CURRENCIES.includes(settings.currency as (typeof COMMON_CURRENCIES)[number]) ? [...COMMON_CURRENCIES] : [settings.currency, ...COMMON_CURRENCIES];
   const { register, handleSubmit, setError, formState } = useForm<WorkshopSettingsPatchInput>({
-    resolver: zodResolver(workshopSettingsPatchSchema),
+    resolver: workshopSettingsPatchResolver,
     defaultValues: {
       name: settings.name,
       unitPreference: settings.unitPreference,

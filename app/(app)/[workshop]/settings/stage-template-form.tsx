@@ -2,14 +2,16 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/input";
-import { buildStagesSchema } from "@/lib/schemas/workshop-settings";
 import { stageKeyFromLabel } from "@/lib/workflow/stage-template";
 import { updateSettingsAction } from "./actions";
 
 type Stage = { key: string; label: string };
+
+const buildStages = lazySchema(() => import("@/lib/schemas/workshop-settings").then((m) => m.buildStagesSchema));
 
 /**
  * The ordered build stages between the deposit and the final setup: add, rename, reorder, remove.
@@ -42,7 +44,7 @@ export function StageTemplateForm({ slug, stages: saved }: { slug: string; stage
   };
   const save = () =>
     startTransition(async () => {
-      const checked = buildStagesSchema.safeParse(stages);
+      const checked = await buildStages.safeParse(stages);
       if (!checked.success) {
         setErrors(Object.fromEntries(checked.error.issues.map((i) => [`buildStages.${i.path.join(".")}`.replace(/\.$/, ""), i.message])));
         return setNotice({ tone: "error", text: "Some stages need another look." });

@@ -1,19 +1,22 @@
 "use client";
 
 // The owner's form for the workshop's common-practice setup ranges, in the workshop's unit.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { Fragment, useState } from "react";
 import { useForm, type Resolver } from "react-hook-form";
 import { parseNumberInput } from "@/components/build-math/spec-form-fields";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/input";
 import { TBody, THead, Table, Td, Th } from "@/components/ui/table";
 import type { LengthUnit } from "@/lib/lutherie/units";
-import { RANGE_FIELDS, setupRangesSchema, type WorkshopSetupRanges } from "@/lib/schemas/setup-ranges";
+import type { WorkshopSetupRanges } from "@/lib/schemas/setup-ranges";
+import { RANGE_FIELDS } from "@/lib/schemas/setup-ranges-values";
 import { rangesFromDisplay, rangesToDisplay } from "@/lib/setup/range-units";
 import { resetSetupRangesAction, saveSetupRangesAction } from "./actions";
+
+const mmResolver = lazyZodResolver(() => import("@/lib/schemas/setup-ranges").then((m) => m.setupRangesSchema));
 
 const FAMILIES = [
   { key: "guitar", label: "Guitar" },
@@ -24,7 +27,6 @@ export function RangesForm({ slug, unit, ranges, customised }: { slug: string; u
   const router = useRouter();
   const [notice, setNotice] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   // The schema's limits are in mm: validate what will be stored.
-  const mmResolver = zodResolver(setupRangesSchema);
   const resolver: Resolver<WorkshopSetupRanges> = (values, ctx, opts) => mmResolver(rangesFromDisplay(values, unit), ctx, opts as never) as never;
   const { register, handleSubmit, formState, reset, setError } = useForm<WorkshopSetupRanges>({ resolver, defaultValues: rangesToDisplay(ranges, unit) });
   const err = (path: string) => path.split(".").reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], formState.errors) as { message?: string } | undefined;

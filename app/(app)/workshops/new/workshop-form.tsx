@@ -1,16 +1,19 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
-import { COMMON_CURRENCIES, slugFromName, workshopCreateSchema, type WorkshopCreateInput } from "@/lib/schemas/workshop";
+import type { WorkshopCreateInput } from "@/lib/schemas/workshop";
+import { COMMON_CURRENCIES, slugFromName } from "@/lib/schemas/workshop-values";
 import { createWorkshopAction } from "./actions";
+
+const workshopCreateResolver = lazyZodResolver(() => import("@/lib/schemas/workshop").then((m) => m.workshopCreateSchema));
 
 const FIELDS = ["name", "slug", "unitPreference", "currency"] as const;
 
@@ -18,7 +21,7 @@ export function WorkshopForm() {
   const [message, setMessage] = useState<string | null>(null);
   const [slugTouched, setSlugTouched] = useState(false);
   const form = useForm<WorkshopCreateInput>({
-    resolver: zodResolver(workshopCreateSchema),
+    resolver: workshopCreateResolver,
     defaultValues: { name: "", slug: "", unitPreference: "mm", currency: "EUR" },
   });
   const { register, handleSubmit, setValue, setError, formState } = form;

@@ -1,15 +1,17 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState, useTransition } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
-import { invitationSignUpSchema } from "@/lib/schemas/member";
+import type { invitationSignUpSchema } from "@/lib/schemas/member";
 import { acceptInvitationAction, acceptWithNewAccountAction } from "./actions";
+
+const invitationSignUpResolver = lazyZodResolver(() => import("@/lib/schemas/member").then((m) => m.invitationSignUpSchema));
 
 export function AcceptButton({ token, workshopName }: { token: string; workshopName: string }) {
   const [pending, startTransition] = useTransition();
@@ -33,7 +35,7 @@ export function AcceptButton({ token, workshopName }: { token: string; workshopN
 export function NewAccountForm({ token, email }: { token: string; email: string }) {
   const [message, setMessage] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<z.input<typeof invitationSignUpSchema>>({
-    resolver: zodResolver(invitationSignUpSchema),
+    resolver: invitationSignUpResolver,
     defaultValues: { token, name: "", password: "" },
   });
   const { errors, isSubmitting } = formState;

@@ -1,17 +1,18 @@
 "use client";
 
 // The new-commission form on react-hook-form with the shared commissionCreateSchema (the price is
-// typed in major units here and turned into minor units before it is checked and sent).
-import { zodResolver } from "@hookform/resolvers/zod";
+// typed in major units here and turned into minor units before it is checked and sent); the
+// schema (form-schema.ts) loads on the first validation.
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
-import { z } from "zod";
+import type { z } from "zod";
 import { commissionPaths } from "@/components/commissions/api-paths";
 import { applyApiErrors } from "@/components/commissions/api-errors";
 import { useCommissionPeople } from "@/components/commissions/queries";
 import { Failed } from "@/components/commissions/query-states";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
@@ -19,21 +20,8 @@ import { Input, Textarea } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { apiFetch, ApiError } from "@/lib/http/api-client";
 import { parseMajor } from "@/lib/money/money";
-import { commissionCreateSchema } from "@/lib/schemas/commission";
 import type { CommissionSummary } from "@/lib/schemas/commission-out";
-
-type Mode = "request" | "owner" | "builder";
-
-/** The shared schema, with the price as typed text and the client required for the workshop. */
-function formSchema(mode: Mode, currency: string) {
-  return commissionCreateSchema
-    .omit({ priceMinor: true, currency: true })
-    .extend({ price: z.string().trim().max(20).default("") })
-    .superRefine((v, ctx) => {
-      if (mode !== "request" && !v.clientId) ctx.addIssue({ code: "custom", path: ["clientId"], message: "Choose the client." });
-      if (mode === "owner" && v.price !== "" && !parseMajor(v.price, currency)) ctx.addIssue({ code: "custom", path: ["price"], message: "Enter an amount such as 3200 or 3200.50." });
-    });
-}
+import type { formSchema, Mode } from "./form-schema";
 
 type FormIn = z.input<ReturnType<typeof formSchema>>;
 type FormOut = z.output<ReturnType<typeof formSchema>>;
@@ -43,8 +31,8 @@ const emptyToUndefined = (v: unknown) => (v === "" || v === null ? undefined : v
 
 export function NewCommissionForm({ slug, mode, currency }: { slug: string; mode: Mode; currency: string }) {
   const router = useRouter();
-  const schema = useMemo(() => formSchema(mode, currency), [mode, currency]);
-  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(schema), defaultValues: { title: "", requestNotes: "", price: "" } });
+  const resolver = useMemo(() => lazyZodResolver(() => import("./form-schema").then((m) => m.formSchema(mode, currency))), [mode, currency]);
+  const form = useForm<FormIn, unknown, FormOut>({ resolver, defaultValues: { title: "", requestNotes: "", price: "" } });
   const people = useCommissionPeople(slug, mode === "request" ? null : "commission-people");
   const [formError, setFormError] = useState<string | null>(null);
   const create = useMutation({ mutationFn: (body: Record<string, unknown>) => apiFetch<{ commission: CommissionSummary }>(commissionPaths(slug).create, { json: body }) });

@@ -4,14 +4,16 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { parseMajor } from "@/lib/money/money";
-import { offlinePaymentSchema } from "@/lib/schemas/commission";
 import { recordPaymentAction } from "./actions";
+
+const offlinePaymentSchema = lazySchema(() => import("@/lib/schemas/commission").then((m) => m.offlinePaymentSchema));
 
 interface Values {
   kind: "deposit" | "balance";
@@ -35,7 +37,7 @@ export function OfflinePaymentForm({ slug, commissionId, currency, suggested }: 
       return;
     }
     const input = { kind: values.kind, amountMinor: amount.amountMinor, reference: values.reference, paidOn: values.paidOn || undefined };
-    const parsed = offlinePaymentSchema.safeParse(input);
+    const parsed = await offlinePaymentSchema.safeParse(input);
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const field = issue.path[0] === "amountMinor" ? "amount" : (issue.path[0] as keyof Values);

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { applyActionErrors } from "@/components/forms/action-errors";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { TextField } from "@/components/forms/text-field";
 import { fmt, INVOICE_LABEL } from "@/components/payments/labels";
 import { Alert } from "@/components/ui/alert";
@@ -11,8 +12,9 @@ import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { parseMajor } from "@/lib/money/money";
-import { refundRequestSchema } from "@/lib/schemas/payment";
 import { refundAction } from "./actions";
+
+const refundRequestSchema = lazySchema(() => import("@/lib/schemas/payment").then((m) => m.refundRequestSchema));
 
 export interface RefundablePayment {
   id: number;
@@ -49,7 +51,7 @@ export function RefundForm({ slug, commissionId, payments }: { slug: string; com
       if (m.amountMinor > payment.refundableMinor) return setError("amount", { message: `At most ${fmt(payment.refundableMinor, payment.currency)} can be refunded of this payment.` });
       amountMinor = m.amountMinor;
     }
-    const parsed = refundRequestSchema.safeParse({ paymentId: payment.id, amountMinor, reason: values.reason || undefined });
+    const parsed = await refundRequestSchema.safeParse({ paymentId: payment.id, amountMinor, reason: values.reason || undefined });
     if (!parsed.success) return setError("reason", { message: parsed.error.issues[0]?.message ?? "Check the form." });
     if (!confirming) {
       const amountText = fmt(amountMinor ?? payment.refundableMinor, payment.currency);

@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
+import { lazySchema } from "@/components/forms/lazy-schema";
 import { SERVICE_DOWN } from "@/components/photos/upload-errors";
 import { UploadProgress } from "@/components/photos/upload-progress";
 import { useUploadPipeline } from "@/components/photos/use-upload-pipeline";
@@ -10,7 +11,9 @@ import { Button } from "@/components/ui/button";
 import { describedBy, Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { ACCEPTED_MIME_TYPES, formatBytes, uploadBatchProblem } from "@/lib/photos/rules";
-import { photoCaptionSchema, type PhotoUploadResult } from "@/lib/schemas/photo";
+import type { PhotoUploadResult } from "@/lib/schemas/photo";
+
+const photoCaptionSchema = lazySchema(() => import("@/lib/schemas/photo").then((m) => m.photoCaptionSchema));
 
 const PROCESSING = "Removing location data and making thumbnails…";
 
@@ -27,7 +30,7 @@ export function PhotoUploadForm({ slug, commissionId, stageLabel }: { slug: stri
   async function submit(e: FormEvent) {
     e.preventDefault();
     setNotice(null);
-    const checkedCaption = photoCaptionSchema.safeParse(caption);
+    const checkedCaption = await photoCaptionSchema.safeParse(caption);
     const problem = uploadBatchProblem(files.map((f) => ({ name: f.name, size: f.size, type: f.type })));
     const next = { caption: checkedCaption.success ? undefined : checkedCaption.error.issues[0]?.message, files: problem?.message };
     setErrors(next);

@@ -3,17 +3,19 @@
 // The final setup sheet form: numbers in the workshop's unit (stored in mm and N), the shared zod
 // schema as resolver, the common-practice checks and the helpers' figures live as you type, and
 // the server's 422 field errors placed back on their fields.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
+import { lazySchema, lazyZodResolver } from "@/components/forms/lazy-schema";
+import { useLazySchema } from "@/components/forms/use-lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field, describedBy } from "@/components/ui/field";
 import { Textarea } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { TBody, THead, Table, Td, Th } from "@/components/ui/table";
-import { ELECTRONICS_CHECKS, setupSheetSchema, type SetupSheet } from "@/lib/schemas/setup-sheet";
+import type { SetupSheet } from "@/lib/schemas/setup-sheet";
+import { ELECTRONICS_CHECKS } from "@/lib/schemas/setup-sheet-values";
 import type { SetupSheetView } from "@/lib/schemas/setup-sheet-out";
 import { checkSetupSheet } from "@/lib/setup/checks";
 import { setupFigures } from "@/lib/setup/figures";
@@ -37,7 +39,8 @@ function normalise(v: Values): Values {
   };
 }
 
-const schemaResolver = zodResolver(setupSheetSchema);
+const setupSheetSchema = lazySchema(() => import("@/lib/schemas/setup-sheet").then((m) => m.setupSheetSchema));
+const schemaResolver = lazyZodResolver(setupSheetSchema.load);
 const resolver: Resolver<Values> = (values, context, options) => schemaResolver(normalise(values), context, options as never) as never;
 
 function initialValues(view: SetupSheetView): Values {
@@ -64,17 +67,18 @@ export function SetupSheetForm({ slug, view }: { slug: string; view: SetupSheetV
   const form = useForm<Values>({ resolver, defaultValues: initialValues(view), mode: "onBlur" });
   const { register, control, handleSubmit, setError, formState } = form;
   const watched = useWatch({ control }) as Values;
+  const schema = useLazySchema(setupSheetSchema);
 
   // Live: the saddle moves as soon as a string's cents parse; the checks and pull-test figures once
   // the whole sheet parses (in mm, as the server sees it).
   const live = useMemo(() => {
     const withCents = (watched.strings ?? []).filter((s) => Number.isFinite(s?.intonationCents)).map((s) => ({ ...s, pullTest: null }));
     const moves = new Map(setupFigures({ strings: withCents }, strings).map((f) => [f.string, f.saddleMoveMm]));
-    const parsed = setupSheetSchema.safeParse(normalise(watched));
-    if (!parsed.success) return { issues: [], figures: null, moves };
+    const parsed = schema?.safeParse(normalise(watched));
+    if (!parsed?.success) return { issues: [], figures: null, moves };
     const mm = sheetFromDisplay(parsed.data, unit);
     return { issues: checkSetupSheet(mm, view.ranges, { stringCount: strings.length, strings, unit }), figures: setupFigures(mm, strings), moves };
-  }, [watched, strings, unit, view.ranges]);
+  }, [watched, schema, strings, unit, view.ranges]);
   const warningAt = (path: string) => live.issues.find((i) => i.path === path && i.level === "warning")?.message;
 
   const submit = (sign: boolean) =>

@@ -2,12 +2,11 @@
 
 // Who sees what on the spec tab: the workshop (owner, builder) drafts and sends; everyone else
 // reads the versions they may see, and the client approves the one sent to them.
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { commissionPaths } from "@/components/commissions/api-paths";
 import { useCommission, useSpecVersion, useSpecVersions } from "@/components/commissions/queries";
 import { Empty, Failed, Loading } from "@/components/commissions/query-states";
 import { SpecChanges } from "@/components/commissions/spec-changes";
-import { SpecVersionView } from "@/components/commissions/spec-version-view";
 import { SpecVersionsTable } from "@/components/commissions/spec-versions-table";
 import { useCommissionChange } from "@/components/commissions/use-commission-change";
 import { Alert } from "@/components/ui/alert";
@@ -17,8 +16,7 @@ import { Textarea } from "@/components/ui/input";
 import { errorMessage } from "@/lib/http/api-client";
 import type { LengthUnit } from "@/lib/lutherie/units";
 import type { SpecVersionSummary } from "@/lib/schemas/spec-version";
-import { ClientApproval } from "./client-approval";
-import { SpecEditor } from "./spec-editor";
+import { ClientApproval, preloadSpecParts, SpecEditor, SpecVersionView } from "./lazy-parts";
 
 export interface SpecClientProps {
   slug: string;
@@ -29,7 +27,8 @@ export interface SpecClientProps {
 }
 
 export function SpecClient(props: SpecClientProps) {
-  const { slug, id } = props;
+  const { slug, id, canDraft, canApprove } = props;
+  useEffect(() => preloadSpecParts({ canDraft, canApprove }), [canDraft, canApprove]);
   const commission = useCommission(slug, id);
   const versions = useSpecVersions(slug, id);
   const [picked, setPicked] = useState<number | null>(null);

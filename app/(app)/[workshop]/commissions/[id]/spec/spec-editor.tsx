@@ -4,17 +4,17 @@
 // plus the build options. Figures follow every keystroke (the same pure computation the server
 // stores with the version); computed errors and warnings also appear on the fields they concern.
 // Saving stores a new version in millimetres; the form shows the workshop's unit.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo, useState } from "react";
 import { useForm, type FieldPath } from "react-hook-form";
 import { BuildResults } from "@/components/build-math/build-results";
 import { PresetPicker } from "@/components/build-math/preset-picker";
 import { SpecFormFields } from "@/components/build-math/spec-form";
 import { focusSpecField } from "@/components/build-math/spec-form-fields";
-import { useLiveResult } from "@/components/build-math/use-live-result";
+import { specResolver, useLiveResult } from "@/components/build-math/use-live-result";
 import { commissionPaths } from "@/components/commissions/api-paths";
 import { BuildOptionsFields } from "@/components/commissions/build-options-fields";
 import { useCommissionChange } from "@/components/commissions/use-commission-change";
+import { lazyZodResolver } from "@/components/forms/lazy-schema";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardHeader } from "@/components/ui/card";
@@ -23,10 +23,13 @@ import { ApiError, errorMessage } from "@/lib/http/api-client";
 import { DEFAULT_PRESET_ID, presetById } from "@/lib/lutherie/presets";
 import { convertSpecUnits } from "@/lib/lutherie/spec-units";
 import { forceUnitFor, formatForce, type LengthUnit } from "@/lib/lutherie/units";
-import { buildOptionsSchema, type BuildOptions } from "@/lib/schemas/build-options";
-import { instrumentSpecSchema, type InstrumentSpec } from "@/lib/schemas/instrument-spec";
+import type { BuildOptions } from "@/lib/schemas/build-options";
+import { DEFAULT_BUILD_OPTIONS } from "@/lib/schemas/build-options-values";
+import type { InstrumentSpec } from "@/lib/schemas/instrument-spec";
 import type { SpecVersionDetail, SpecVersionSummary } from "@/lib/schemas/spec-version";
 import { diffValues } from "@/lib/workflow/spec-diff";
+
+const buildOptionsResolver = lazyZodResolver(() => import("@/lib/schemas/build-options").then((m) => m.buildOptionsSchema));
 
 export interface SpecEditorProps {
   slug: string;
@@ -40,8 +43,8 @@ export interface SpecEditorProps {
 export function SpecEditor({ slug, commissionId, fileName, unit, base }: SpecEditorProps) {
   const toast = useToast();
   const initialSpec = useMemo(() => convertSpecUnits(base ? base.spec : presetById(DEFAULT_PRESET_ID).spec, unit), [base, unit]);
-  const specForm = useForm<InstrumentSpec>({ resolver: zodResolver(instrumentSpecSchema), mode: "onChange", defaultValues: initialSpec });
-  const optionsForm = useForm({ resolver: zodResolver(buildOptionsSchema), defaultValues: base?.options ?? buildOptionsSchema.parse({}) });
+  const specForm = useForm<InstrumentSpec>({ resolver: specResolver, mode: "onChange", defaultValues: initialSpec });
+  const optionsForm = useForm({ resolver: buildOptionsResolver, defaultValues: base?.options ?? DEFAULT_BUILD_OPTIONS });
   const { result, shown } = useLiveResult(specForm, initialSpec);
   const [formError, setFormError] = useState<string | null>(null);
   const save = useCommissionChange<{ spec: InstrumentSpec; options: BuildOptions }, { version: SpecVersionSummary }>(slug, (body) => ({ path: commissionPaths(slug).versions(commissionId), json: body }));
