@@ -1,7 +1,8 @@
 // What the webhook does with a verified event: find the Checkout Session it concerns, read that
 // session, its payment and refunds from the processor as they are now, and hand the snapshot to
 // lib/data/processor-events.ts, which applies it once per event id.
-import type Stripe from "stripe";
+import Stripe from "stripe";
+import { z } from "zod";
 import { resolveProcessorEventScope } from "@/lib/auth/workshop-access";
 import {
   applyCheckoutSnapshot,
@@ -12,6 +13,7 @@ import {
   type ProcessorEventInfo,
   type RefundSnapshot,
 } from "@/lib/data/processor-events";
+import { AppError, zodIssues } from "@/lib/http/errors";
 import { stripe } from "@/lib/services/stripe";
 import { readCheckoutMetadata, sessionStatus } from "./processor-metadata";
 
@@ -31,6 +33,22 @@ export const HANDLED_EVENT_TYPES = new Set([
 ]);
 
 const idOf = (v: string | { id: string } | null | undefined): string | null => (v == null ? null : typeof v === "string" ? v : v.id);
+
+/** What the handler reads of a handled event; a signed event without it is refused (400), never a crash. */
+const handledEventSchema = z.object({
+  id: z.string().min(1).max(191),
+  type: z.string().max(100),
+  created: z.number().int().min(0),
+  data: z.object({
+    object: z.looseObject({
+      id: z.string().min(1).max(191),
+      payment_intent: z.union([z.string().max(191), z.looseObject({ id: z.string().max(191) }), z.null()]).optional(),
+    }),
+  }),
+});
+
+/** True for the processor's "no such object" (a session or payment intent that is not in this account). */
+const isMissingAtProcessor = (err: unknown) => err instanceof Stripe.errors.StripeInvalidRequestError && err.statusCode === 404;
 
 /** The payment intent an event's object belongs to (or the session itself for checkout events). */
 function subjectOf(event: Stripe.Event): { sessionId: string } | { intentId: string } | null {
@@ -99,6 +117,8 @@ export async function loadCheckoutSnapshot(client: Stripe, sessionId: string): P
  */
 export async function handleStripeEvent(event: Stripe.Event, client: Stripe = stripe()): Promise<EventOutcome> {
   if (!HANDLED_EVENT_TYPES.has(event.type)) return "ignored";
+  const shape = handledEventSchema.safeParse(event);
+  if (!shape.success) throw new AppError("bad_request", "The event does not have the fields of a processor event.", zodIssues(shape.error));
   if (await isProcessorEventRecorded(event.id)) return "duplicate";
   const subject = subjectOf(event);
   const info: ProcessorEventInfo = {
@@ -107,9 +127,17 @@ export async function handleStripeEvent(event: Stripe.Event, client: Stripe = st
     objectId: idOf((event.data.object as { id?: string }).id ?? null),
     createdAt: new Date(event.created * 1000),
   };
-  const sessionId = subject ? await sessionIdFor(client, subject) : null;
-  if (!sessionId) return recordIgnoredEvent(info);
-  const { snapshot, metadata } = await loadCheckoutSnapshot(client, sessionId);
+  let loaded: Awaited<ReturnType<typeof loadCheckoutSnapshot>>;
+  try {
+    const sessionId = subject ? await sessionIdFor(client, subject) : null;
+    if (!sessionId) return recordIgnoredEvent(info);
+    loaded = await loadCheckoutSnapshot(client, sessionId);
+  } catch (err) {
+    // A session or payment the processor does not know is not one of ours.
+    if (isMissingAtProcessor(err)) return recordIgnoredEvent(info);
+    throw err;
+  }
+  const { snapshot, metadata } = loaded;
   const ref = readCheckoutMetadata(metadata);
   if (!ref) return recordIgnoredEvent(info);
   const scope = await resolveProcessorEventScope(ref.workshopId, ref.commissionId);

@@ -62,9 +62,16 @@ export const commentSchema = z.object({
   body: z.string().trim().min(1, "Write something first.").max(4000, "At most 4000 characters."),
 });
 
+/** Tomorrow in UTC (YYYY-MM-DD): a workshop ahead of UTC may already be on that day. */
+const tomorrowUtc = () => new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
+
 export const offlinePaymentSchema = z.object({
   kind: z.enum(["deposit", "balance"]),
   amountMinor: z.int().positive().max(1e11),
   reference: z.string().trim().min(2, "Give the reference (bank transfer, receipt number…).").max(120),
-  paidOn: isoDate.optional(),
+  // The day the money arrived: not in the future, and inside what the payment's timestamp can hold.
+  // (Checked only once it is a date, so a malformed one gets the one message about its format.)
+  paidOn: isoDate
+    .pipe(z.string().refine((d) => d >= "2000-01-01", "Use a date from 2000 on.").refine((d) => d <= tomorrowUtc(), "A payment cannot have arrived in the future."))
+    .optional(),
 });

@@ -178,3 +178,10 @@ describe("another workshop's cohorts", () => {
     expect((await testDb()("cohorts").where({ id: foreign.id }).first("name")).name).toBe("Private course");
   });
 });
+
+describe("cohort ids in the path", () => {
+  it("treats a malformed cohort id in the path as not found", async () => {
+    expect((await owner.fetch(`${cohorts()}/abc`)).status).toBe(404);
+    expect((await owner.fetch(`${cohorts()}/0`, { method: "DELETE" })).status).toBe(404);
+  });
+});

@@ -146,3 +146,14 @@ describe("commission visibility by role", () => {
     expect(idsOf(page)).toEqual([c.inB]);
   });
 });
+
+describe("the benchmark's floor route", () => {
+  it("answers 404 in normal operation, with or without a guessed token", async () => {
+    const variants: Array<Record<string, string>> = [{}, { "x-bench-token": "0".repeat(48) }, { "x-bench-token": "" }];
+    for (const headers of variants) {
+      const res = await owner.fetch(`/api/bench/commission-list?workshopId=${a.id}`, { headers });
+      expect(res.status).toBe(404);
+      expect(((await res.json()) as { error: { code: string } }).error.code).toBe("not_found");
+    }
+  });
+});
