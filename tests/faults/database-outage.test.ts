@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { TestWorkshop } from "../http/fixtures";
 import type { HttpSession } from "../http/session";
-import { startFaultStack, type FaultStack } from "./stack";
+import { startFaultStack, workshopOnStack, type FaultStack } from "./stack";
 
 let stack: FaultStack;
 let ws: TestWorkshop;
@@ -21,14 +21,7 @@ interface Outcome {
 
 beforeAll(async () => {
   stack = await startFaultStack("db", 60);
-  // The fixtures and the session helpers read these when first used: point them at this stack.
-  process.env.DB_PORT = stack.dbPort;
-  process.env.TEST_APP_URL = stack.appUrl;
-  const fixtures = await import("../http/fixtures");
-  const session = await import("../http/session");
-  db = (await import("../setup/test-db")).testDb();
-  ws = await fixtures.createWorkshopWithMembers();
-  owner = await session.signIn(ws.owner);
+  ({ db, ws, owner } = await workshopOnStack(stack));
 }, 180_000);
 
 afterAll(async () => {

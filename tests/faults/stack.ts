@@ -101,3 +101,19 @@ export async function startFaultStack(name: string, offset: number): Promise<Fau
     },
   };
 }
+
+/**
+ * Points the test helpers (fixtures, sessions, test-db) at the private stack and makes a workshop
+ * with its members there, signed in as the owner. The helpers read DB_PORT and TEST_APP_URL when
+ * first used, so they are imported only after these are set.
+ */
+export async function workshopOnStack(stack: FaultStack) {
+  process.env.DB_PORT = stack.dbPort;
+  process.env.TEST_APP_URL = stack.appUrl;
+  const fixtures = await import("../http/fixtures");
+  const session = await import("../http/session");
+  const db = (await import("../setup/test-db")).testDb();
+  const ws = await fixtures.createWorkshopWithMembers();
+  const owner = await session.signIn(ws.owner);
+  return { db, ws, owner };
+}

@@ -27,13 +27,14 @@ export function fakeResendUrl(path = ""): string {
   return `http://127.0.0.1:${port}${path}`;
 }
 
-export async function messagesTo(email: string): Promise<FakeMessage[]> {
-  const res = await fetch(fakeResendUrl(`/admin/messages?to=${encodeURIComponent(email)}`));
+/** `base` points at another e-mail fake than the test stack's (the fault tests run their own). */
+export async function messagesTo(email: string, base = fakeResendUrl()): Promise<FakeMessage[]> {
+  const res = await fetch(`${base}/admin/messages?to=${encodeURIComponent(email)}`);
   return ((await res.json()) as { data: FakeMessage[] }).data;
 }
 
-export async function requestsTo(email: string): Promise<FakeRequest[]> {
-  const res = await fetch(fakeResendUrl(`/admin/requests?to=${encodeURIComponent(email)}`));
+export async function requestsTo(email: string, base = fakeResendUrl()): Promise<FakeRequest[]> {
+  const res = await fetch(`${base}/admin/requests?to=${encodeURIComponent(email)}`);
   return ((await res.json()) as { data: FakeRequest[] }).data;
 }
 
