@@ -17,7 +17,8 @@ export default async function WorkshopLayout({ children, params }: { children: R
     ...(can("commission.read") ? [{ href: `/${workshop.slug}/commissions`, label: "Commissions" }] : []),
     ...(can("commission.advance") ? [{ href: `/${workshop.slug}/commissions/board`, label: "Board" }] : []),
     ...(can("member.names") ? [{ href: `/${workshop.slug}/members`, label: "Members" }] : []),
-    ...(can("setup.read") ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
+    // A client reads their sheet on the commission's Setup tab; the workshop-wide queue is for staff.
+    ...(can("setup.read") && scope.role !== "client" ? [{ href: `/${workshop.slug}/setup`, label: "Final setup" }] : []),
     ...(can("overview.read") ? [{ href: `/${workshop.slug}/overview`, label: "Overview" }] : []),
     ...(can("ledger.read") ? [{ href: `/${workshop.slug}/books`, label: "Books" }] : []),
     ...(can("cohort.read") ? [{ href: `/${workshop.slug}/cohorts`, label: "Cohorts" }] : []),
