@@ -17,7 +17,7 @@ const say = (s: string) => console.log(`[bench] ${s}`);
 
 async function main() {
   say(`start: ${loadText()}`);
-  prepareDatabase();
+  const releaseDatabase = prepareDatabase();
   const t0 = performance.now();
   const ws = await prepareBulkWorkshop();
   say(`workshop ${ws.slug}: ${ws.count.toLocaleString("en")} commissions ready in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
@@ -38,6 +38,7 @@ async function main() {
     await app.stop();
     await closeBenchDb();
     await closeTestDb();
+    releaseDatabase();
   }
 }
 

@@ -38,7 +38,7 @@ async function main() {
   say(`start: ${loadText()}`);
   const inproc = computeInProcess();
   say(`in-process, fanned 8-string / 27 frets / 3 pickups: ${Math.round(inproc.compute).toLocaleString("en")} computeSpec/s, ${Math.round(inproc.parseCompute).toLocaleString("en")} parse+compute/s (result ${inproc.resultBytes} bytes of JSON)`);
-  prepareDatabase();
+  const releaseDatabase = prepareDatabase();
   const cost = await limiterCost();
   const costText = Object.entries(cost).map(([k, v]) => `${k} ${v.toFixed(3)} ms`).join(", ");
   say(`rate limiter, mean time per hit, sequential, against MariaDB: ${costText}`);
@@ -54,6 +54,7 @@ async function main() {
     }
   }
   await closeBenchDb();
+  releaseDatabase();
   say(`summary (${loadText()}):`);
   console.log(`  computeSpec in process: ${Math.round(inproc.compute)}/s (target ≥ 20000/s); with zod parse: ${Math.round(inproc.parseCompute)}/s`);
   console.log(`  limiter per hit: ${costText}`);

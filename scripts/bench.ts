@@ -60,7 +60,7 @@ async function main() {
   say(`start: ${before}`);
   const inproc = computeInProcess(1000);
   say(`computeSpec in process: ${Math.round(inproc.compute).toLocaleString("en")}/s (with the zod parse ${Math.round(inproc.parseCompute).toLocaleString("en")}/s)`);
-  prepareDatabase();
+  const releaseDatabase = prepareDatabase();
   const ws = await prepareBulkWorkshop();
   const mid = await prepareBulkWorkshop(OVERVIEW_SLUG, OVERVIEW_COUNT);
   say(`workshops ${ws.slug}: ${ws.count.toLocaleString("en")} commissions, ${mid.slug}: ${mid.count} commissions`);
@@ -104,6 +104,7 @@ async function main() {
     await fake.stop();
     await closeBenchDb();
     await closeTestDb();
+    releaseDatabase();
   }
   const after = uptime();
   console.log("");

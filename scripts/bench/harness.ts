@@ -26,10 +26,17 @@ function must(cmd: string, args: string[], env: NodeJS.ProcessEnv, label: string
   if (r.status !== 0) throw new Error(`${label} failed (${r.status ?? r.signal})`);
 }
 
-/** Starts MariaDB if needed and migrates the test database (kept, not wiped). */
-export function prepareDatabase(): void {
+/**
+ * Starts MariaDB if needed and migrates the test database (kept, not wiped). Returns a function that
+ * stops MariaDB again only if this run started it, so the bench leaves the machine as it found it.
+ */
+export function prepareDatabase(): () => void {
+  const wasRunning = spawnSync("bash", ["db/mariadb.sh", "status"], { cwd: ROOT, env: process.env, stdio: "ignore" }).status === 0;
   must("bash", ["db/mariadb.sh", "start"], process.env, "MariaDB");
   must(process.execPath, ["--import", "tsx", "db/cli.ts", "migrate"], { ...process.env, KNEX_ENV: "test" }, "migrations");
+  return () => {
+    if (!wasRunning) spawnSync("bash", ["db/mariadb.sh", "stop"], { cwd: ROOT, env: process.env, stdio: "inherit" });
+  };
 }
 
 /** A connection to the test database for fixtures and counters (closed by closeBenchDb). */
