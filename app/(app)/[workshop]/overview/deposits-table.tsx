@@ -4,30 +4,13 @@ import { formatMoney, money } from "@/lib/money/money";
 import type { Overview } from "@/lib/schemas/overview";
 
 /** Deposits asked for and not yet paid in full, with a total per currency. */
-export function DepositsTable({
-  slug,
-  deposits,
-}: {
-  slug: string;
-  deposits: NonNullable<Overview["depositsOutstanding"]>;
-}) {
-  if (deposits.items.length === 0)
-    return (
-      <p className="px-5 py-4 text-sm text-graphite-500">
-        Every deposit asked for has been paid.
-      </p>
-    );
-  const fmt = (minor: number, currency: string) =>
-    formatMoney(money(minor, currency));
+export function DepositsTable({ slug, deposits }: { slug: string; deposits: NonNullable<Overview["depositsOutstanding"]> }) {
+  if (deposits.items.length === 0) return <p className="px-5 py-4 text-sm text-graphite-500">Every deposit asked for has been paid.</p>;
+  const fmt = (minor: number, currency: string) => formatMoney(money(minor, currency));
   const all = deposits.totals.reduce((n, t) => n + t.commissions, 0);
   return (
     <>
-      {all > deposits.items.length ? (
-        <p className="px-2 pb-2 text-sm text-graphite-600">
-          The first {deposits.items.length} of {all} by number; the totals count
-          all of them.
-        </p>
-      ) : null}
+      {all > deposits.items.length ? <p className="px-2 pb-2 text-sm text-graphite-600">The first {deposits.items.length} of {all} by number; the totals count all of them.</p> : null}
       <Table caption="Deposits outstanding" className="min-w-[36rem]">
         <THead>
           <tr>
@@ -55,8 +38,7 @@ export function DepositsTable({
           {deposits.totals.map((t) => (
             <tr key={t.currency} className="bg-spruce-50">
               <Td colSpan={4} className="font-semibold">
-                Total in {t.currency} ({t.commissions} commission
-                {t.commissions === 1 ? "" : "s"})
+                Total in {t.currency} ({t.commissions} commission{t.commissions === 1 ? "" : "s"})
               </Td>
               <Td numeric className="font-semibold">
                 {fmt(t.outstandingMinor, t.currency)}
