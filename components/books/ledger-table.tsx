@@ -3,25 +3,24 @@
 // The payments ledger on TanStack Table v9. The server filters, sorts and pages (manualSorting,
 // manualPagination); the table's state comes from the URL view and every change goes back to it.
 // The footer holds the totals per currency over every page. Below md the rows render as cards.
-import { createColumnHelper, rowPaginationFeature, rowSortingFeature, tableFeatures, useTable, type ColumnDef, type SortingState, type Updater } from "@tanstack/react-table";
+import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo } from "react";
 import { formatMinor, formatWhen } from "@/components/commissions/format";
 import { Badge } from "@/components/ui/badge";
-import { Table, TBody, Td, Th, THead } from "@/components/ui/table";
+import { BodyRows, Pager, SortableHead, useServerTable, type ServerTableColumns, type ServerTableFeatures } from "@/components/ui/server-table";
+import { Table, Td } from "@/components/ui/table";
 import type { CurrencyTotals } from "@/lib/books/entries";
 import type { LedgerEntryOut } from "@/lib/schemas/books";
 import { cx } from "@/lib/ui/cx";
 import { entryKindLabel, entryStatus } from "./labels";
 import { ledgerSortToSorting, sortingToLedgerSort, type LedgerView } from "./ledger-view";
 
-const features = tableFeatures({ rowSortingFeature, rowPaginationFeature });
-const helper = createColumnHelper<typeof features, LedgerEntryOut>();
+const helper = createColumnHelper<ServerTableFeatures, LedgerEntryOut>();
 const NUMERIC = new Set(["amount", "fee", "net"]);
 
 function buildColumns(slug: string) {
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  const cols: ColumnDef<typeof features, LedgerEntryOut, any>[] = [
+  const cols: ServerTableColumns<LedgerEntryOut> = [
     helper.accessor("date", { id: "date", header: "Date (UTC)", sortDescFirst: true, cell: (info) => <span className="whitespace-nowrap">{formatWhen(info.getValue())}</span> }),
     helper.accessor((r) => r.commission.number, {
       id: "commission",
@@ -74,66 +73,24 @@ export interface LedgerTableProps {
 export function LedgerTable({ slug, rows, total, totals, view, setView, busy }: LedgerTableProps) {
   const columns = useMemo(() => buildColumns(slug), [slug]);
   const sorting = useMemo(() => ledgerSortToSorting(view.sort), [view.sort]);
-  const pagination = useMemo(() => ({ pageIndex: view.page - 1, pageSize: view.pageSize }), [view.page, view.pageSize]);
-  const table = useTable({
-    features,
+  const table = useServerTable({
     columns,
-    data: rows,
-    rowCount: total,
-    manualSorting: true,
-    manualPagination: true,
-    enableSortingRemoval: false,
-    enableMultiSort: false,
-    state: { sorting, pagination },
-    onSortingChange: (u: Updater<SortingState>) => setView({ sort: sortingToLedgerSort(typeof u === "function" ? u(sorting) : u) }),
-    onPaginationChange: (u) => {
-      const next = typeof u === "function" ? u(pagination) : u;
-      setView({ page: next.pageIndex + 1, pageSize: next.pageSize });
-    },
+    rows,
+    total,
+    sorting,
+    page: view.page,
+    pageSize: view.pageSize,
+    onSort: (next) => setView({ sort: sortingToLedgerSort(next) }),
+    onPage: setView,
   });
-  const from = total === 0 ? 0 : (view.page - 1) * view.pageSize + 1;
-  const to = Math.min(total, view.page * view.pageSize);
   const width = columns.length;
 
   return (
     <div className="space-y-3" aria-busy={busy || undefined}>
       <div className={cx("hidden md:block", busy && "opacity-60")}>
         <Table caption="Payments ledger" aria-label="Payments ledger">
-          <THead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const canSort = header.column.getCanSort();
-                  return (
-                    <Th key={header.id} aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : canSort ? "none" : undefined} className={NUMERIC.has(header.column.id) ? "text-right" : undefined}>
-                      {canSort ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase tracking-wider hover:text-rosewood-700">
-                          <table.FlexRender header={header} />
-                          <span aria-hidden className="font-mono">
-                            {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </Th>
-                  );
-                })}
-              </tr>
-            ))}
-          </THead>
-          <TBody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="hover:bg-spruce-50">
-                {row.getAllCells().map((cell) => (
-                  <Td key={cell.id} numeric={NUMERIC.has(cell.column.id)}>
-                    <table.FlexRender cell={cell} />
-                  </Td>
-                ))}
-              </tr>
-            ))}
-          </TBody>
+          <SortableHead table={table} numeric={NUMERIC} />
+          <BodyRows table={table} numeric={NUMERIC} />
           <tfoot className="border-t-2 border-spruce-300 bg-spruce-50 font-semibold">
             {totals.map((t) => (
               <tr key={t.currency} aria-label={`Totals in ${t.currency}`}>
@@ -177,22 +134,7 @@ export function LedgerTable({ slug, rows, total, totals, view, setView, busy }: 
         ))}
       </ul>
 
-      <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3 text-sm">
-        <p role="status" aria-live="polite">
-          {total === 0 ? "No entries" : `Showing ${from}–${to} of ${total}`}
-        </p>
-        <div className="flex items-center gap-2">
-          <button type="button" className="h-9 rounded-chip border border-spruce-300 bg-white px-3 font-semibold disabled:opacity-40" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous
-          </button>
-          <span className="font-mono tabular">
-            Page {view.page} of {Math.max(1, table.getPageCount())}
-          </span>
-          <button type="button" className="h-9 rounded-chip border border-spruce-300 bg-white px-3 font-semibold disabled:opacity-40" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next
-          </button>
-        </div>
-      </nav>
+      <Pager table={table} page={view.page} pageSize={view.pageSize} total={total} empty="No entries" />
     </div>
   );
 }

@@ -4,19 +4,19 @@
 // manualPagination); the table's sorting and pagination state are derived from the URL view and
 // every change goes back to it. Below md the same rows render as cards, so a phone never scrolls
 // sideways.
-import { createColumnHelper, rowPaginationFeature, rowSortingFeature, tableFeatures, useTable, type ColumnDef, type SortingState, type Updater } from "@tanstack/react-table";
+import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo } from "react";
 import { Badge } from "@/components/ui/badge";
-import { Table, TBody, Td, Th, THead } from "@/components/ui/table";
+import { BodyRows, Pager, SortableHead, useServerTable, type ServerTableColumns, type ServerTableFeatures } from "@/components/ui/server-table";
+import { Table } from "@/components/ui/table";
 import type { CommissionSummary } from "@/lib/schemas/commission-out";
 import { cx } from "@/lib/ui/cx";
 import { formatDay, formatPrice } from "./format";
 import { sortingToSort, sortToSorting, type ListView } from "./list-view";
 import { StageBadge } from "./stage-badge";
 
-const features = tableFeatures({ rowSortingFeature, rowPaginationFeature });
-const helper = createColumnHelper<typeof features, CommissionSummary>();
+const helper = createColumnHelper<ServerTableFeatures, CommissionSummary>();
 
 export interface CommissionTableProps {
   slug: string;
@@ -32,8 +32,7 @@ export interface CommissionTableProps {
 const dateSort = { sortDescFirst: false };
 
 function buildColumns(slug: string, showClient: boolean, showMoney: boolean) {
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  const cols: ColumnDef<typeof features, CommissionSummary, any>[] = [
+  const cols: ServerTableColumns<CommissionSummary> = [
     helper.accessor("number", {
       header: "Number",
       cell: (info) => (
@@ -78,67 +77,23 @@ export function CommissionTable({ slug, rows, total, view, setView, showClient, 
   const showMoney = rows.some((r) => r.money !== null);
   const columns = useMemo(() => buildColumns(slug, showClient, showMoney), [slug, showClient, showMoney]);
   const sorting = useMemo(() => sortToSorting(view.sort), [view.sort]);
-  const pagination = useMemo(() => ({ pageIndex: view.page - 1, pageSize: view.pageSize }), [view.page, view.pageSize]);
-
-  const table = useTable({
-    features,
+  const table = useServerTable({
     columns,
-    data: rows,
-    rowCount: total,
-    manualSorting: true,
-    manualPagination: true,
-    enableSortingRemoval: false,
-    enableMultiSort: false,
-    state: { sorting, pagination },
-    onSortingChange: (u: Updater<SortingState>) => setView({ sort: sortingToSort(typeof u === "function" ? u(sorting) : u) }),
-    onPaginationChange: (u) => {
-      const next = typeof u === "function" ? u(pagination) : u;
-      setView({ page: next.pageIndex + 1, pageSize: next.pageSize });
-    },
+    rows,
+    total,
+    sorting,
+    page: view.page,
+    pageSize: view.pageSize,
+    onSort: (next) => setView({ sort: sortingToSort(next) }),
+    onPage: setView,
   });
-
-  const from = total === 0 ? 0 : (view.page - 1) * view.pageSize + 1;
-  const to = Math.min(total, view.page * view.pageSize);
 
   return (
     <div className="space-y-3" aria-busy={busy || undefined}>
       <div className={cx("hidden md:block", busy && "opacity-60")}>
         <Table caption="Commissions" aria-label="Commissions">
-          <THead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  const canSort = header.column.getCanSort();
-                  return (
-                    <Th key={header.id} aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : canSort ? "none" : undefined} className={NUMERIC.has(header.column.id) ? "text-right" : undefined}>
-                      {canSort ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase tracking-wider hover:text-rosewood-700">
-                          <table.FlexRender header={header} />
-                          <span aria-hidden className="font-mono">
-                            {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </Th>
-                  );
-                })}
-              </tr>
-            ))}
-          </THead>
-          <TBody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="hover:bg-spruce-50">
-                {row.getAllCells().map((cell) => (
-                  <Td key={cell.id} numeric={NUMERIC.has(cell.column.id)}>
-                    <table.FlexRender cell={cell} />
-                  </Td>
-                ))}
-              </tr>
-            ))}
-          </TBody>
+          <SortableHead table={table} numeric={NUMERIC} />
+          <BodyRows table={table} numeric={NUMERIC} />
         </Table>
       </div>
 
@@ -150,22 +105,7 @@ export function CommissionTable({ slug, rows, total, view, setView, showClient, 
         ))}
       </ul>
 
-      <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3 text-sm">
-        <p role="status" aria-live="polite">
-          {total === 0 ? "No commissions" : `Showing ${from}–${to} of ${total}`}
-        </p>
-        <div className="flex items-center gap-2">
-          <button type="button" className="h-9 rounded-chip border border-spruce-300 bg-white px-3 font-semibold disabled:opacity-40" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
-            Previous
-          </button>
-          <span className="font-mono tabular">
-            Page {view.page} of {Math.max(1, table.getPageCount())}
-          </span>
-          <button type="button" className="h-9 rounded-chip border border-spruce-300 bg-white px-3 font-semibold disabled:opacity-40" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
-            Next
-          </button>
-        </div>
-      </nav>
+      <Pager table={table} page={view.page} pageSize={view.pageSize} total={total} empty="No commissions" />
     </div>
   );
 }

@@ -4,7 +4,7 @@
 // to the address bar; the search box waits for a pause in typing.
 import { useEffect, useState } from "react";
 import { Input } from "@/components/ui/input";
-import { Select } from "@/components/ui/select";
+import { LabelledSelect } from "@/components/ui/select";
 import { COMMISSION_SORTS } from "@/lib/schemas/commission-values";
 import { DEFAULT_VIEW, isFiltered, PAGE_SIZES, type CommissionSort, type ListView } from "./list-view";
 import type { PersonOption, StageOption } from "./queries";
@@ -122,18 +122,5 @@ export function ListFilters({ view, setView, stages, people, showBuilderFilter }
         </div>
       ) : null}
     </form>
-  );
-}
-
-function LabelledSelect({ id, label, value, onChange, children }: { id: string; label: string; value: string; onChange: (v: string) => void; children: React.ReactNode }) {
-  return (
-    <div>
-      <label htmlFor={id} className="mb-1 block text-xs font-semibold uppercase tracking-wider text-graphite-700">
-        {label}
-      </label>
-      <Select id={id} value={value} onChange={(e) => onChange(e.target.value)}>
-        {children}
-      </Select>
-    </div>
   );
 }

@@ -34,3 +34,15 @@ export function Failed({ error, retry, what = "This" }: { error: unknown; retry?
     </div>
   );
 }
+
+/** A page number past the last page (an old link, or rows removed since): offer the first page. */
+export function NoSuchPage({ page, backToFirst }: { page: number; backToFirst: () => void }) {
+  return (
+    <Empty>
+      There is no page {page}.{" "}
+      <button type="button" className="font-semibold text-rosewood-700 underline" onClick={backToFirst}>
+        Back to the first page
+      </button>
+    </Empty>
+  );
+}

@@ -1,4 +1,4 @@
-import { forwardRef, type SelectHTMLAttributes } from "react";
+import { forwardRef, type ReactNode, type SelectHTMLAttributes } from "react";
 import { cx } from "@/lib/ui/cx";
 import { controlClasses } from "./input";
 
@@ -24,3 +24,17 @@ export const Select = forwardRef<HTMLSelectElement, SelectProps>(function Select
     </select>
   );
 });
+
+/** A select with its label above, for filter bars: each change is reported as the new value. */
+export function LabelledSelect({ id, label, value, onChange, children }: { id: string; label: string; value: string; onChange: (v: string) => void; children: ReactNode }) {
+  return (
+    <div>
+      <label htmlFor={id} className="mb-1 block text-xs font-semibold uppercase tracking-wider text-graphite-700">
+        {label}
+      </label>
+      <Select id={id} value={value} onChange={(e) => onChange(e.target.value)}>
+        {children}
+      </Select>
+    </div>
+  );
+}

@@ -2,7 +2,7 @@
 
 // The ledger screen: filters from the address bar, the page and its totals from the API, and the
 // CSV export of the same filters.
-import { Empty, Failed, Loading } from "@/components/commissions/query-states";
+import { Empty, Failed, Loading, NoSuchPage } from "@/components/commissions/query-states";
 import { LedgerFilters } from "@/components/books/ledger-filters";
 import { LedgerTable } from "@/components/books/ledger-table";
 import { changeLedgerView, isLedgerFiltered, ledgerApiQuery, ledgerFilterParams, ledgerViewParams, readLedgerView } from "@/components/books/ledger-view";
@@ -30,12 +30,7 @@ export function LedgerClient({ slug, currentMonth }: { slug: string; currentMont
       ) : ledger.data.total === 0 ? (
         <Empty>{isLedgerFiltered(view) ? "No entry matches these filters." : "No payments recorded yet."}</Empty>
       ) : ledger.data.items.length === 0 ? (
-        <Empty>
-          There is no page {view.page}.{" "}
-          <button type="button" className="font-semibold text-rosewood-700 underline" onClick={() => setView({ page: 1 })}>
-            Back to the first page
-          </button>
-        </Empty>
+        <NoSuchPage page={view.page} backToFirst={() => setView({ page: 1 })} />
       ) : (
         <>
           {ledger.isError ? <Failed what="The latest entries" error={ledger.error} retry={() => ledger.refetch()} /> : null}

@@ -5,7 +5,7 @@ import { CommissionTable } from "@/components/commissions/commission-table";
 import { ListFilters } from "@/components/commissions/list-filters";
 import { isFiltered, listApiQuery } from "@/components/commissions/list-view";
 import { useCommissionList, useCommissionPeople, useStageLine } from "@/components/commissions/queries";
-import { Empty, Failed, Loading } from "@/components/commissions/query-states";
+import { Empty, Failed, Loading, NoSuchPage } from "@/components/commissions/query-states";
 import { useListView } from "@/components/commissions/use-list-view";
 
 export function CommissionsClient({
@@ -35,12 +35,7 @@ export function CommissionsClient({
       ) : list.data.total === 0 ? (
         <Empty>{isFiltered(view) ? "No commission matches these filters." : showClient ? "No commissions yet." : "No commissions yet: you have not asked for an instrument."}</Empty>
       ) : list.data.items.length === 0 ? (
-        <Empty>
-          There is no page {view.page}.{" "}
-          <button type="button" className="font-semibold text-rosewood-700 underline" onClick={() => setView({ page: 1 })}>
-            Back to the first page
-          </button>
-        </Empty>
+        <NoSuchPage page={view.page} backToFirst={() => setView({ page: 1 })} />
       ) : (
         <>
           {list.isError ? <Failed what="The latest figures" error={list.error} retry={() => list.refetch()} /> : null}
